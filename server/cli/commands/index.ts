@@ -1,0 +1,7 @@
+import type { Command } from 'commander';
+
+/** A command registers itself (name, options, action) on the program. */
+export type RegisterCommand = (program: Command) => void;
+
+/** Every command of the command line, in the order `--help` lists them. */
+export const commands: RegisterCommand[] = [];
