@@ -1,0 +1,60 @@
+/**
+ * Builds the Express app without listening, so tests drive it with supertest and
+ * `index.ts` only binds a port. Order: security headers → body parsing → API routes →
+ * API 404 → built client → one error middleware.
+ */
+import express, { type Express, type Router } from 'express';
+import helmet from 'helmet';
+import { existsSync } from 'node:fs';
+import { join, resolve } from 'node:path';
+import type { Sequelize } from 'sequelize';
+import type { Config } from './config.ts';
+import { apiNotFound, errorMiddleware } from './http/errorMiddleware.ts';
+import { healthRoutes } from './features/health/health.routes.ts';
+import { apiFeatures } from './features/index.ts';
+
+export type AppDeps = { config: Config; sequelize: Sequelize };
+
+/** Largest JSON body the API accepts; a design spec is a few kilobytes. */
+export const JSON_BODY_LIMIT = '512kb';
+
+export function createApp(deps: AppDeps): Express {
+  const { config, sequelize } = deps;
+  const app = express();
+  app.disable('x-powered-by');
+  if (config.trustProxy > 0) app.set('trust proxy', config.trustProxy);
+
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        useDefaults: true,
+        directives: {
+          'img-src': ["'self'", 'data:', 'blob:'],
+          'worker-src': ["'self'", 'blob:'],
+          'style-src': ["'self'", "'unsafe-inline'"],
+          'connect-src': ["'self'"],
+          'upgrade-insecure-requests': config.isProduction ? [] : null,
+        },
+      },
+      hsts: config.isProduction,
+    }),
+  );
+
+  const api: Router = express.Router();
+  api.use(express.json({ limit: JSON_BODY_LIMIT }));
+  api.use(healthRoutes(sequelize, config.dbTimeoutMs));
+  for (const mount of apiFeatures) mount(api, deps);
+  api.use(apiNotFound);
+  app.use('/api', api);
+
+  const clientDir = resolve(config.clientDir);
+  const indexHtml = join(clientDir, 'index.html');
+  if (existsSync(indexHtml)) {
+    app.use(express.static(clientDir, { index: false, maxAge: '1h' }));
+    // Client-side routes: every other GET gets the app shell.
+    app.get('/{*splat}', (_req, res) => res.sendFile(indexHtml));
+  }
+
+  app.use(errorMiddleware);
+  return app;
+}

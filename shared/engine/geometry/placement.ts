@@ -1,0 +1,88 @@
+/**
+ * Turning a part's local frame into the world: a signed axis for each local axis (a proper
+ * rotation by 90° steps) and the world position of the part's low corner. See `Placement`.
+ */
+import { assert } from '../../assert.ts';
+import type { Box3, Placement, Vec3, WorldAxis } from '../types.ts';
+
+/** Local axes → signed world axes, as stored on a {@link Placement}. */
+export type AxisMap = Placement['axes'];
+
+const AXIS_INDEX = { X: 0, Y: 1, Z: 2 } as const;
+
+function parseAxis(axis: WorldAxis): { index: 0 | 1 | 2; sign: 1 | -1 } {
+  return { index: AXIS_INDEX[axis[1] as 'X' | 'Y' | 'Z'], sign: axis[0] === '-' ? -1 : 1 };
+}
+
+/** The 3×3 rotation matrix of `axes`, columns = where local x, y, z point. */
+export function axisMatrix(axes: AxisMap): number[][] {
+  const m = [
+    [0, 0, 0],
+    [0, 0, 0],
+    [0, 0, 0],
+  ];
+  [axes.length, axes.width, axes.thickness].forEach((axis, column) => {
+    const { index, sign } = parseAxis(axis);
+    m[index]![column] = sign;
+  });
+  return m;
+}
+
+/** Determinant of the axis mapping: +1 for a rotation, -1 for a mirror, 0 when axes repeat. */
+export function axisDeterminant(axes: AxisMap): number {
+  const m = axisMatrix(axes);
+  const r = (i: number, j: number): number => m[i]![j]!;
+  return (
+    r(0, 0) * (r(1, 1) * r(2, 2) - r(1, 2) * r(2, 1)) -
+    r(0, 1) * (r(1, 0) * r(2, 2) - r(1, 2) * r(2, 0)) +
+    r(0, 2) * (r(1, 0) * r(2, 1) - r(1, 1) * r(2, 0))
+  );
+}
+
+/** The part's size along world X, Y and Z once turned by `axes`, mm. */
+export function worldSize(axes: AxisMap, size: Vec3): Vec3 {
+  const out: [number, number, number] = [0, 0, 0];
+  [axes.length, axes.width, axes.thickness].forEach((axis, i) => {
+    out[parseAxis(axis).index] = size[i]!;
+  });
+  return out;
+}
+
+/**
+ * Maps a box in a part's local frame to the world, for a part of local `size` placed with its
+ * low world corner at `positionMm`.
+ */
+export function localBoxToWorld(box: Box3, size: Vec3, axes: AxisMap, positionMm: Vec3): Box3 {
+  const min: [number, number, number] = [0, 0, 0];
+  const max: [number, number, number] = [0, 0, 0];
+  [axes.length, axes.width, axes.thickness].forEach((axis, i) => {
+    const { index, sign } = parseAxis(axis);
+    const lo = sign > 0 ? box.min[i]! : size[i]! - box.max[i]!;
+    const hi = sign > 0 ? box.max[i]! : size[i]! - box.min[i]!;
+    min[index] = positionMm[index]! + lo;
+    max[index] = positionMm[index]! + hi;
+  });
+  return { min, max };
+}
+
+/**
+ * The placement that puts a part of local `size`, turned by `axes`, so that it fills the world
+ * box `world`. Asserts the sizes agree and the mapping is a rotation, not a mirror.
+ */
+export function placeInto(
+  partId: string,
+  instance: number,
+  label: string,
+  size: Vec3,
+  axes: AxisMap,
+  world: Box3,
+  explodeMm: Vec3,
+): Placement {
+  assert(axisDeterminant(axes) === 1, `placement of ${partId} must be a rotation, not a mirror`);
+  const turned = worldSize(axes, size);
+  for (let i = 0; i < 3; i++) {
+    const span = world.max[i]! - world.min[i]!;
+    assert(Math.abs(span - turned[i]!) < 1e-6, `${partId} does not fill its place on axis ${i}: ${span} vs ${turned[i]}`);
+  }
+  return { partId, instance, label, positionMm: world.min, axes, explodeMm };
+}

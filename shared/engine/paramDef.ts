@@ -1,0 +1,27 @@
+/** Parameter metadata: what a form needs to show, check and explain one parameter. */
+import type { ParamValue } from './types.ts';
+
+/** How a parameter is entered and checked. */
+export type ParamKind = 'length' | 'number' | 'percent' | 'enum' | 'boolean' | 'species' | 'sheet';
+
+/** One parameter of a piece kind. Lengths are in mm (defaults, min and max alike). */
+export interface ParamDef {
+  key: string;
+  /** The label a form shows, e.g. `Leg size (square)`. */
+  label: string;
+  /** The form group, e.g. `Size`, `Legs`, `Lid`. */
+  group: string;
+  kind: ParamKind;
+  default: ParamValue;
+  /** Inclusive limits for lengths (mm) and numbers. */
+  min?: number;
+  max?: number;
+  /** Whole numbers only (counts). */
+  integer?: boolean;
+  /** Unit shown beside a `number`, e.g. `N·m`; lengths carry their own unit. */
+  unit?: string;
+  /** Choices of an `enum`, with the words a form shows. */
+  options?: readonly { value: string; label: string }[];
+  /** One sentence on what it does and a sensible value. */
+  help?: string;
+}
