@@ -58,7 +58,7 @@ export interface PanelFloat {
   gapEachSideMm: number;
   gapEachSideIn: number;
   gapEachSide: DualLength;
-  /** Panel width to cut when its tongues sit this gap off the groove bottoms, equal to the input, mm. */
+  /** Panel width across the grain at build, tongues included, mm (as given). */
   panelWidthMm: number;
   /** Seasonal swing of the panel; null for sheet goods (negligible movement). */
   movement: SeasonalSwing | null;

@@ -88,7 +88,7 @@ function sheet(
     kind,
     face,
     nominal,
-    thicknessMm: thicknessIn * MM_PER_INCH,
+    thicknessMm: Number((thicknessIn * MM_PER_INCH).toPrecision(12)),
     thicknessIn,
     movement: 'negligible',
     movementNote: kind === 'mdf' ? MDF_MOVEMENT : PLYWOOD_MOVEMENT,

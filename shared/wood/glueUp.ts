@@ -1,0 +1,75 @@
+/**
+ * Glue-up of a solid panel from boards: how many boards of at most a given width make the
+ * panel, their widths, and how the glued panel moves. A glued panel moves as one board of its
+ * full width (WH2010 Eq. 13-2 is linear in width), so narrower boards do not reduce movement;
+ * they limit cupping and let the grain be matched.
+ */
+import { InputError } from '../errors.ts';
+import { dual, type DualLength } from '../units/dual.ts';
+import type { Climate } from './climate.ts';
+import { checkWidth, seasonalSwing, type Sawn, type SeasonalSwing } from './movement.ts';
+import type { SpeciesInput } from './resolve.ts';
+
+/** How the widths are shared: all equal, or the widest boards in the middle. */
+export type GlueUpArrangement = 'equal' | 'widest-middle';
+
+/** Inputs for {@link planGlueUp}. */
+export interface GlueUpInput {
+  /** Finished panel width across the grain, mm. */
+  panelWidthMm: number;
+  /** Widest board to use, finished, mm. */
+  maxBoardWidthMm: number;
+  arrangement: GlueUpArrangement;
+  species: SpeciesInput;
+  sawn: Sawn;
+  climate: Climate;
+}
+
+/** A glue-up plan. */
+export interface GlueUpPlan {
+  boardCount: number;
+  /** Finished width of each board, edge to edge across the panel, mm. */
+  boardWidthsMm: number[];
+  boardWidths: DualLength[];
+  arrangement: GlueUpArrangement;
+  /** Seasonal movement of the whole panel. */
+  movement: SeasonalSwing;
+  note: string;
+}
+
+/**
+ * Plans a panel `panelWidthMm` wide from boards no wider than `maxBoardWidthMm`: the fewest
+ * boards, equal widths or the widest in the middle, and the panel's seasonal movement.
+ */
+export function planGlueUp(input: GlueUpInput): GlueUpPlan {
+  checkWidth(input.panelWidthMm, 'panelWidthMm');
+  checkWidth(input.maxBoardWidthMm, 'maxBoardWidthMm');
+  if (input.arrangement !== 'equal' && input.arrangement !== 'widest-middle') {
+    throw new InputError('arrangement', `must be equal or widest-middle (got "${String(input.arrangement)}")`, 'equal, widest-middle');
+  }
+  const movement = seasonalSwing({ widthMm: input.panelWidthMm, species: input.species, sawn: input.sawn, climate: input.climate });
+  // toFixed keeps 300 / 100 from counting as 3.0000000001 boards.
+  const boardCount = Math.max(1, Math.ceil(Number((input.panelWidthMm / input.maxBoardWidthMm).toFixed(9))));
+  const boardWidthsMm =
+    input.arrangement === 'equal'
+      ? Array.from({ length: boardCount }, () => input.panelWidthMm / boardCount)
+      : widestInMiddle(input.panelWidthMm, input.maxBoardWidthMm, boardCount);
+  return {
+    boardCount,
+    boardWidthsMm,
+    boardWidths: boardWidthsMm.map((width) => dual(width)),
+    arrangement: input.arrangement,
+    movement,
+    note: 'Widths are finished sizes; add jointing and ripping allowance to each board. The panel moves as one board of its full width.',
+  };
+}
+
+// The middle board (or middle two, for an even count) takes the full board width; the others
+// share the rest equally. With the fewest boards the others never exceed the full width.
+function widestInMiddle(panelWidthMm: number, maxBoardWidthMm: number, count: number): number[] {
+  if (count <= 2) return Array.from({ length: count }, () => panelWidthMm / count);
+  const middleCount = count % 2 === 1 ? 1 : 2;
+  const otherWidth = (panelWidthMm - middleCount * maxBoardWidthMm) / (count - middleCount);
+  const side = Array.from({ length: (count - middleCount) / 2 }, () => otherWidth);
+  return [...side, ...Array.from({ length: middleCount }, () => maxBoardWidthMm), ...side];
+}
