@@ -1,0 +1,84 @@
+/**
+ * The design editor's own state: the spec being edited with its undo history, what is selected
+ * and hovered, and how the 3D view is set. Server data (the design, its revisions) stays in
+ * TanStack Query; this store only remembers which revision the edit started from.
+ */
+import { create } from 'zustand';
+import type { Climate } from '../../shared/wood/climate.ts';
+import type { ParamValue, PieceSpec } from '../../shared/engine/types.ts';
+import { record, redo, seal, startHistory, undo, type History } from '../editor/history.ts';
+
+/** The preset camera positions of the 3D view. */
+export type ViewName = 'front' | 'side' | 'top' | 'three-quarter';
+
+/** A section plane across one world axis, at a position in mm. */
+export interface Cutaway {
+  axis: 'x' | 'y' | 'z';
+  positionMm: number;
+}
+
+interface EditorState {
+  designId: string | null;
+  /** The revision number the edit started from; a save sends it as the base. */
+  baseRevision: number | null;
+  history: History<PieceSpec> | null;
+  /** The spec as last loaded or saved: the edit is unsaved while the present differs from it. */
+  savedSpec: PieceSpec | null;
+  selectedPartId: string | null;
+  hoveredPartId: string | null;
+  explode: number;
+  cutaway: Cutaway | null;
+  view: ViewName;
+
+  /** Starts editing `spec` of `designId` at `revision`, forgetting the previous history. */
+  load: (designId: string, revision: number, spec: PieceSpec) => void;
+  /** Marks `spec` as saved as `revision`, keeping the history. */
+  markSaved: (revision: number, spec: PieceSpec) => void;
+  setParam: (key: string, value: ParamValue) => void;
+  setClimate: (climate: Climate | undefined) => void;
+  /** Ends the step for the field being typed in (on leaving it). */
+  sealStep: () => void;
+  undo: () => void;
+  redo: () => void;
+  select: (partId: string | null) => void;
+  hover: (partId: string | null) => void;
+  setExplode: (explode: number) => void;
+  setCutaway: (cutaway: Cutaway | null) => void;
+  setView: (view: ViewName) => void;
+}
+
+export const useEditorStore = create<EditorState>()((set) => ({
+  designId: null,
+  baseRevision: null,
+  history: null,
+  savedSpec: null,
+  selectedPartId: null,
+  hoveredPartId: null,
+  explode: 0,
+  cutaway: null,
+  view: 'three-quarter',
+
+  load: (designId, revision, spec) =>
+    set({ designId, baseRevision: revision, history: startHistory(spec), savedSpec: spec, selectedPartId: null, hoveredPartId: null }),
+  markSaved: (revision, spec) => set({ baseRevision: revision, savedSpec: spec }),
+  setParam: (key, value) =>
+    set((state) => {
+      if (!state.history || state.history.present.params[key] === value) return {};
+      const present = state.history.present;
+      return { history: record(state.history, { ...present, params: { ...present.params, [key]: value } }, key) };
+    }),
+  setClimate: (climate) =>
+    set((state) => {
+      if (!state.history) return {};
+      const { climate: _old, ...rest } = state.history.present;
+      return { history: record(state.history, climate ? { ...rest, climate } : rest, null) };
+    }),
+  sealStep: () => set((state) => (state.history ? { history: seal(state.history) } : {})),
+  undo: () => set((state) => (state.history ? { history: undo(state.history) } : {})),
+  redo: () => set((state) => (state.history ? { history: redo(state.history) } : {})),
+  select: (selectedPartId) => set({ selectedPartId }),
+  hover: (hoveredPartId) => set({ hoveredPartId }),
+  setExplode: (explode) => set({ explode: Math.min(1, Math.max(0, explode)) }),
+  setCutaway: (cutaway) => set({ cutaway }),
+  setView: (view) => set({ view }),
+}));
