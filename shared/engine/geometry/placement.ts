@@ -3,7 +3,7 @@
  * rotation by 90° steps) and the world position of the part's low corner. See `Placement`.
  */
 import { assert } from '../../assert.ts';
-import type { Box3, Placement, Vec3, WorldAxis } from '../types.ts';
+import type { Box3, PartFace, Placement, Vec3, WorldAxis } from '../types.ts';
 
 /** Local axes → signed world axes, as stored on a {@link Placement}. */
 export type AxisMap = Placement['axes'];
@@ -85,4 +85,46 @@ export function placeInto(
     assert(Math.abs(span - turned[i]!) < 1e-6, `${partId} does not fill its place on axis ${i}: ${span} vs ${turned[i]}`);
   }
   return { partId, instance, label, positionMm: world.min, axes, explodeMm };
+}
+
+/** Maps a world box back into the local frame of a part placed at `positionMm` with `axes`. */
+export function worldBoxToLocal(box: Box3, size: Vec3, axes: AxisMap, positionMm: Vec3): Box3 {
+  const min: [number, number, number] = [0, 0, 0];
+  const max: [number, number, number] = [0, 0, 0];
+  [axes.length, axes.width, axes.thickness].forEach((axis, i) => {
+    const { index, sign } = parseAxis(axis);
+    const lo = box.min[index]! - positionMm[index]!;
+    const hi = box.max[index]! - positionMm[index]!;
+    min[i] = sign > 0 ? lo : size[i]! - hi;
+    max[i] = sign > 0 ? hi : size[i]! - lo;
+  });
+  return { min, max };
+}
+
+const FACE_BY_LOCAL: readonly (readonly [PartFace, PartFace])[] = [
+  ['end-a', 'end-b'],
+  ['edge-a', 'edge-b'],
+  ['face-a', 'face-b'],
+];
+
+/** The face of a placed part that looks toward the world direction `direction`. */
+export function localFaceOf(axes: AxisMap, direction: WorldAxis): PartFace {
+  const wanted = parseAxis(direction);
+  const local = [axes.length, axes.width, axes.thickness].findIndex((axis) => parseAxis(axis).index === wanted.index);
+  assert(local >= 0, `no local axis maps to ${direction}`);
+  const sign = parseAxis([axes.length, axes.width, axes.thickness][local]!).sign * wanted.sign;
+  return FACE_BY_LOCAL[local]![sign > 0 ? 1 : 0]!;
+}
+
+/** The world direction opposite `axis`. */
+export function oppositeAxis(axis: WorldAxis): WorldAxis {
+  return `${axis[0] === '+' ? '-' : '+'}${axis[1]}` as WorldAxis;
+}
+
+/** The unit vector of a signed world axis. */
+export function axisVector(axis: WorldAxis): Vec3 {
+  const { index, sign } = parseAxis(axis);
+  const v: [number, number, number] = [0, 0, 0];
+  v[index] = sign;
+  return v;
 }

@@ -67,7 +67,7 @@ export const CHEST_PARAMS: readonly ParamDef[] = [
   { key: 'battenWidth', label: 'Batten width', group: LID, kind: 'length', default: 2 * IN, min: 20, max: 150 },
   { key: 'battenThickness', label: 'Batten thickness', group: LID, kind: 'length', default: 0.75 * IN, min: 10, max: 50 },
   { key: 'battenSlots', label: 'Battens screwed through slots', group: LID, kind: 'boolean', default: true, help: 'Slots let the lid move across its grain; round holes split it.' },
-  { key: 'battenScrewDiameter', label: 'Batten screw diameter', group: LID, kind: 'length', default: 4.2, min: 2, max: 10, help: 'Shank of the screws through the battens (a #8 screw is about 4.2 mm).' },
+  { key: 'screwDiameter', label: 'Screw shank diameter', group: LID, kind: 'length', default: 4.2, min: 2, max: 10, help: 'Screws through the battens and cleats (a #8 wood screw is about 4.2 mm, from memory, approximate).' },
 
   { key: 'hingeType', label: 'Hinge type', group: HARDWARE, kind: 'enum', default: 'lid-support', options: [{ value: 'lid-support', label: 'Lid-support hinges (hold the lid at any angle)' }, { value: 'butt', label: 'Butt hinges (need a separate lid support)' }] },
   { key: 'hingeCount', label: 'Hinges', group: HARDWARE, kind: 'number', default: 2, min: 2, max: 6, integer: true },

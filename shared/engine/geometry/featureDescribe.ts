@@ -1,0 +1,104 @@
+/**
+ * Turns a cut drawn in the world (boxes of removed material, a tongue's solid) into a feature
+ * in the part's own frame with the numbers a maker sets a machine to: width, depth, offset,
+ * start and stop. The chest is easiest to reason about in world coordinates; drawings and
+ * joinery tables need each feature in its part's terms.
+ */
+import { assert } from '../../assert.ts';
+import type { Box3, Feature, FeatureType, PartFace, Vec3, WorldAxis } from '../types.ts';
+import { boxSize } from './box.ts';
+import { localFaceOf, worldBoxToLocal, type AxisMap } from './placement.ts';
+
+/** A feature drawn in world coordinates, before it is mapped into its part. */
+export interface FeatureDraft {
+  id: string;
+  type: FeatureType;
+  label: string;
+  /** World direction the cut face looks toward (out of the part). */
+  faceDir: WorldAxis;
+  /** Removed material, world boxes (mm); the first is the one measured. */
+  removed: readonly Box3[];
+  /** A tongue's own solid, world box (mm). */
+  tongue?: Box3;
+  /** Holes and slots: shank diameter (mm); slots also their length and direction. */
+  diameterMm?: number;
+  slot?: { lengthMm: number; alongDir: WorldAxis };
+}
+
+const NORMAL_AXIS: Record<PartFace, 0 | 1 | 2> = {
+  'end-a': 0, 'end-b': 0, 'edge-a': 1, 'edge-b': 1, 'face-a': 2, 'face-b': 2,
+};
+
+function extent(box: Box3, axis: number): number {
+  return box.max[axis]! - box.min[axis]!;
+}
+
+/** Maps a world {@link FeatureDraft} into the local frame of a placed part and measures it. */
+export function describeFeature(draft: FeatureDraft, size: Vec3, axes: AxisMap, positionMm: Vec3): Feature {
+  const toLocal = (box: Box3): Box3 => worldBoxToLocal(box, size, axes, positionMm);
+  const removed = draft.removed.map(toLocal);
+  const face = localFaceOf(axes, draft.faceDir);
+  const normal = NORMAL_AXIS[face];
+  const base = { id: draft.id, face, label: draft.label, removed };
+
+  if (draft.type === 'tongue') {
+    assert(draft.tongue, `tongue ${draft.id} needs its solid`);
+    const tongue = toLocal(draft.tongue);
+    const across = normal === 2 ? 1 : 2;
+    const along = [0, 1, 2].find((a) => a !== normal && a !== across)!;
+    return {
+      ...base, type: 'tongue', tongue,
+      lengthMm: extent(tongue, normal),
+      thicknessMm: extent(tongue, across),
+      widthMm: extent(tongue, along),
+    };
+  }
+
+  const main = removed[0];
+  assert(main, `feature ${draft.id} removes nothing`);
+  const sizeOf = boxSize(main);
+  // The axis a groove runs along is the longer of the two in the face's plane.
+  const inPlane = [0, 1, 2].filter((a) => a !== normal);
+  const along = inPlane.reduce((a, b) => (extent(main, b) > extent(main, a) ? b : a));
+  const across = inPlane.find((a) => a !== along)!;
+
+  switch (draft.type) {
+    case 'groove':
+      return { ...base, type: 'groove', widthMm: extent(main, across), depthMm: extent(main, normal), offsetMm: main.min[across]!, lengthMm: extent(main, along) };
+    case 'stopped-groove':
+      return {
+        ...base, type: 'stopped-groove', widthMm: extent(main, across), depthMm: extent(main, normal),
+        offsetMm: main.min[across]!, startMm: main.min[along]!, stopMm: main.max[along]!,
+      };
+    case 'dado':
+      return { ...base, type: 'dado', widthMm: extent(main, across), depthMm: extent(main, normal), offsetMm: main.min[across]! };
+    case 'rabbet': {
+      // A rabbet runs along an edge or end; its depth goes into the broad face.
+      const depthAxis = normal === 2 ? 1 : 2;
+      const runAxis = [0, 1, 2].find((a) => a !== normal && a !== depthAxis)!;
+      return { ...base, type: 'rabbet', widthMm: extent(main, normal), depthMm: extent(main, depthAxis), lengthMm: extent(main, runAxis) };
+    }
+    case 'notch':
+      return { ...base, type: 'notch', lengthMm: sizeOf[0], widthMm: sizeOf[1], depthMm: sizeOf[2], atMm: [main.min[0], main.min[1]] };
+    case 'recess':
+    case 'mortise':
+      return {
+        ...base, type: draft.type, lengthMm: extent(main, inPlane[0]!), widthMm: extent(main, inPlane[1]!),
+        depthMm: extent(main, normal), atMm: [main.min[inPlane[0]!]!, main.min[inPlane[1]!]!],
+      };
+    case 'hole': {
+      assert(draft.diameterMm !== undefined, `hole ${draft.id} needs a diameter`);
+      const centre: [number, number] = [(main.min[inPlane[0]!]! + main.max[inPlane[0]!]!) / 2, (main.min[inPlane[1]!]! + main.max[inPlane[1]!]!) / 2];
+      return { ...base, type: 'hole', diameterMm: draft.diameterMm, depthMm: extent(main, normal), atMm: centre };
+    }
+    case 'slot': {
+      assert(draft.diameterMm !== undefined && draft.slot, `slot ${draft.id} needs a diameter and a length`);
+      const runFace = localFaceOf(axes, draft.slot.alongDir);
+      const centre: [number, number] = [(main.min[inPlane[0]!]! + main.max[inPlane[0]!]!) / 2, (main.min[inPlane[1]!]! + main.max[inPlane[1]!]!) / 2];
+      return {
+        ...base, type: 'slot', diameterMm: draft.diameterMm, slotLengthMm: draft.slot.lengthMm, depthMm: extent(main, normal),
+        atMm: centre, along: NORMAL_AXIS[runFace] === 0 ? 'length' : 'width',
+      };
+    }
+  }
+}

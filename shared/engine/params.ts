@@ -1,0 +1,149 @@
+/**
+ * Parameters of every piece kind: their metadata (for forms), defaults, and the one place a
+ * spec is checked before the engine computes anything. `validateSpec` merges the defaults over
+ * the given parameters, checks every value against its range, then every combination the piece
+ * cannot be built with, and throws an `InputError` naming the parameter and the limit.
+ */
+import { InputError } from '../errors.ts';
+import { checkClimate, DEFAULT_CLIMATE, type Climate } from '../wood/climate.ts';
+import { isSheetGoodId, SHEET_GOOD_IDS } from '../wood/sheetGoods.ts';
+import { isSpeciesId, SPECIES_IDS } from '../wood/species.ts';
+import type { ParamDef } from './paramDef.ts';
+import { CHEST_PARAMS } from './pieces/chestParams.ts';
+import { validateChestCombinations } from './pieces/chestValidate.ts';
+import type { ParamValue, PieceKind, PieceSpec } from './types.ts';
+
+export type { ParamDef, ParamKind } from './paramDef.ts';
+
+/** Every piece kind the engine knows the name of, built or not. */
+export const PIECE_KINDS: readonly PieceKind[] = ['chest', 'dresser', 'cabinet'];
+
+interface KindParams {
+  defs: readonly ParamDef[];
+  /** Throws an InputError for a combination of values that cannot be built. */
+  combinations: (params: Readonly<Record<string, ParamValue>>, climate: Climate) => void;
+}
+
+// Dressers and cabinets join this table when they are built.
+const KINDS: Partial<Record<PieceKind, KindParams>> = {
+  chest: { defs: CHEST_PARAMS, combinations: validateChestCombinations },
+};
+
+function kindParams(kind: unknown): KindParams {
+  if (typeof kind !== 'string' || !(PIECE_KINDS as readonly string[]).includes(kind)) {
+    throw new InputError('kind', `unknown piece kind "${String(kind)}"; choose one of: ${PIECE_KINDS.join(', ')}`, PIECE_KINDS.join(', '));
+  }
+  const entry = KINDS[kind as PieceKind];
+  if (!entry) {
+    const built = Object.keys(KINDS).join(', ');
+    throw new InputError('kind', `the ${kind} is not built by this version of the engine yet; available: ${built}`, built);
+  }
+  return entry;
+}
+
+/** The parameters of a piece kind, in form order; an unknown or unbuilt kind is an InputError. */
+export function paramDefs(kind: PieceKind): readonly ParamDef[] {
+  return kindParams(kind).defs;
+}
+
+/** A spec of `kind` with every parameter at its default and the default climate. */
+export function defaultSpec(kind: PieceKind): PieceSpec {
+  const params: Record<string, ParamValue> = {};
+  for (const def of kindParams(kind).defs) params[def.key] = def.default;
+  return { schemaVersion: 1, kind, params, climate: { ...climateOf(DEFAULT_CLIMATE) } };
+}
+
+function climateOf(c: { buildMcPercent: number; lowMcPercent: number; highMcPercent: number }) {
+  return { buildMcPercent: c.buildMcPercent, lowMcPercent: c.lowMcPercent, highMcPercent: c.highMcPercent };
+}
+
+const mmText = (n: number): string => `${Math.round(n * 100) / 100} mm`;
+
+function rangeText(def: ParamDef): string {
+  const unit = def.kind === 'length' ? ' mm' : def.unit ? ` ${def.unit}` : '';
+  const round = (n: number) => Math.round(n * 100) / 100;
+  return `between ${round(def.min ?? -Infinity)}${unit} and ${round(def.max ?? Infinity)}${unit}${def.integer ? ', a whole number' : ''}`;
+}
+
+function checkValue(def: ParamDef, value: unknown): ParamValue {
+  switch (def.kind) {
+    case 'length':
+    case 'number':
+    case 'percent': {
+      const limit = rangeText(def);
+      if (typeof value !== 'number' || !Number.isFinite(value)) {
+        throw new InputError(def.key, `${def.label} must be a number${def.kind === 'length' ? ' of millimetres' : ''} (got ${JSON.stringify(value) ?? String(value)})`, limit);
+      }
+      if ((def.min !== undefined && value < def.min) || (def.max !== undefined && value > def.max) || (def.integer && !Number.isInteger(value))) {
+        const shown = def.kind === 'length' ? mmText(value) : String(value);
+        throw new InputError(def.key, `${def.label} must be ${limit} (got ${shown})`, limit);
+      }
+      return value;
+    }
+    case 'boolean':
+      if (typeof value !== 'boolean') throw new InputError(def.key, `${def.label} must be true or false (got ${JSON.stringify(value) ?? String(value)})`, 'true or false');
+      return value;
+    case 'enum': {
+      const options = (def.options ?? []).map((o) => o.value);
+      if (typeof value !== 'string' || !options.includes(value)) {
+        throw new InputError(def.key, `${def.label} must be one of ${options.join(', ')} (got ${JSON.stringify(value) ?? String(value)})`, options.join(', '));
+      }
+      return value;
+    }
+    case 'species':
+      if (typeof value !== 'string' || !isSpeciesId(value)) {
+        throw new InputError(def.key, `${def.label} must be one of ${SPECIES_IDS.join(', ')} (got ${JSON.stringify(value) ?? String(value)})`, SPECIES_IDS.join(', '));
+      }
+      return value;
+    case 'sheet':
+      if (typeof value !== 'string' || !isSheetGoodId(value)) {
+        throw new InputError(def.key, `${def.label} must be one of ${SHEET_GOOD_IDS.join(', ')} (got ${JSON.stringify(value) ?? String(value)})`, SHEET_GOOD_IDS.join(', '));
+      }
+      return value;
+  }
+}
+
+/**
+ * Checks a spec from anywhere (a form, the API, a file) and returns it complete: defaults
+ * merged over the given parameters, every value in range, every combination buildable, the
+ * climate valid. Throws an `InputError` naming the field and the limit at the first problem.
+ */
+export function validateSpec(spec: unknown): PieceSpec {
+  if (typeof spec !== 'object' || spec === null || Array.isArray(spec)) {
+    throw new InputError('spec', 'a piece spec must be an object with schemaVersion, kind and params', 'an object');
+  }
+  const s = spec as Record<string, unknown>;
+  if (s.schemaVersion !== 1) {
+    throw new InputError('schemaVersion', `this engine reads spec schema version 1 (got ${JSON.stringify(s.schemaVersion) ?? 'nothing'})`, '1');
+  }
+  const { defs, combinations } = kindParams(s.kind);
+  const given = s.params ?? {};
+  if (typeof given !== 'object' || given === null || Array.isArray(given)) {
+    throw new InputError('params', 'params must be an object of parameter values', 'an object');
+  }
+  const byKey = new Map(defs.map((d) => [d.key, d]));
+  for (const key of Object.keys(given)) {
+    if (!byKey.has(key)) {
+      const keys = defs.map((d) => d.key).join(', ');
+      throw new InputError(key, `is not a ${String(s.kind)} parameter; known parameters: ${keys}`, keys);
+    }
+  }
+  const params: Record<string, ParamValue> = {};
+  for (const def of defs) {
+    const value = (given as Record<string, unknown>)[def.key];
+    params[def.key] = value === undefined ? def.default : checkValue(def, value);
+  }
+  const climate = s.climate === undefined ? climateOf(DEFAULT_CLIMATE) : checkClimate(readClimate(s.climate));
+  combinations(params, climate);
+  const out: PieceSpec = { schemaVersion: 1, kind: s.kind as PieceKind, params, climate };
+  if (s.room !== undefined) out.room = s.room;
+  return out;
+}
+
+function readClimate(value: unknown): { buildMcPercent: number; lowMcPercent: number; highMcPercent: number } {
+  if (typeof value !== 'object' || value === null) {
+    throw new InputError('climate', 'climate must be an object with buildMcPercent, lowMcPercent and highMcPercent', 'an object');
+  }
+  const c = value as Record<string, unknown>;
+  return climateOf({ buildMcPercent: c.buildMcPercent as number, lowMcPercent: c.lowMcPercent as number, highMcPercent: c.highMcPercent as number });
+}
