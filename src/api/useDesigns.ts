@@ -1,0 +1,25 @@
+import { keepPreviousData, useQuery } from '@tanstack/react-query';
+import { designListResponse, type PIECE_KINDS } from '../../shared/schemas/designs.ts';
+import { fetchParsed } from './fetchJson.ts';
+
+/** The filters a workshop's design grid offers. */
+export interface DesignFilters {
+  q?: string;
+  kind?: (typeof PIECE_KINDS)[number];
+  authorId?: string;
+  archived?: 'true' | 'false' | 'all';
+}
+
+/** A workshop's designs as cards, filtered on the server. */
+export function useDesigns(workshopId: string | undefined, filters: DesignFilters) {
+  return useQuery({
+    queryKey: ['designs', 'list', workshopId, filters],
+    enabled: Boolean(workshopId),
+    placeholderData: keepPreviousData,
+    queryFn: () => {
+      const query = new URLSearchParams();
+      for (const [key, value] of Object.entries(filters)) if (value) query.set(key, value);
+      return fetchParsed(designListResponse, `/api/workshops/${workshopId}/designs?${query}`);
+    },
+  });
+}
