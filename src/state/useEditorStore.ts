@@ -34,7 +34,8 @@ interface EditorState {
   load: (designId: string, revision: number, spec: PieceSpec) => void;
   /** Marks `spec` as saved as `revision`, keeping the history. */
   markSaved: (revision: number, spec: PieceSpec) => void;
-  setParam: (key: string, value: ParamValue) => void;
+  /** Sets a parameter; `typing` merges successive keystrokes in one field into one undo step. */
+  setParam: (key: string, value: ParamValue, typing?: boolean) => void;
   setClimate: (climate: Climate | undefined) => void;
   /** Ends the step for the field being typed in (on leaving it). */
   sealStep: () => void;
@@ -61,11 +62,11 @@ export const useEditorStore = create<EditorState>()((set) => ({
   load: (designId, revision, spec) =>
     set({ designId, baseRevision: revision, history: startHistory(spec), savedSpec: spec, selectedPartId: null, hoveredPartId: null }),
   markSaved: (revision, spec) => set({ baseRevision: revision, savedSpec: spec }),
-  setParam: (key, value) =>
+  setParam: (key, value, typing = false) =>
     set((state) => {
       if (!state.history || state.history.present.params[key] === value) return {};
       const present = state.history.present;
-      return { history: record(state.history, { ...present, params: { ...present.params, [key]: value } }, key) };
+      return { history: record(state.history, { ...present, params: { ...present.params, [key]: value } }, typing ? key : null) };
     }),
   setClimate: (climate) =>
     set((state) => {

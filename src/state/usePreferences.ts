@@ -11,6 +11,9 @@ import {
 } from '../editor/displayUnits.ts';
 
 interface PreferencesState extends DisplayUnits {
+  /** The workshop opened last, so the workshop link returns to it. */
+  lastWorkshopId: string | null;
+  setLastWorkshop: (workshopId: string) => void;
   setUnit: (unit: LengthUnit) => void;
   setInchPrecision: (precision: EditorInchPrecision) => void;
   setMmPrecision: (precision: EditorMmPrecision) => void;
@@ -20,6 +23,8 @@ export const usePreferences = create<PreferencesState>()(
   persist(
     (set) => ({
       ...DEFAULT_DISPLAY_UNITS,
+      lastWorkshopId: null,
+      setLastWorkshop: (lastWorkshopId) => set({ lastWorkshopId }),
       setUnit: (unit) => set({ unit }),
       setInchPrecision: (inchPrecision) => set({ inchPrecision }),
       setMmPrecision: (mmPrecision) => set({ mmPrecision }),
@@ -28,12 +33,13 @@ export const usePreferences = create<PreferencesState>()(
       name: 'casewright.units',
       version: 1,
       storage: createJSONStorage(() => localStorage),
-      partialize: ({ unit, inchPrecision, mmPrecision }) => ({ unit, inchPrecision, mmPrecision }),
+      partialize: ({ unit, inchPrecision, mmPrecision, lastWorkshopId }) => ({ unit, inchPrecision, mmPrecision, lastWorkshopId }),
       // A hand-edited or older stored value must not put an unknown precision on screen.
       merge: (stored, current) => {
-        const s = (stored ?? {}) as Partial<DisplayUnits>;
+        const s = (stored ?? {}) as Partial<DisplayUnits & { lastWorkshopId: string | null }>;
         return {
           ...current,
+          lastWorkshopId: typeof s.lastWorkshopId === 'string' ? s.lastWorkshopId : null,
           unit: s.unit === 'mm' || s.unit === 'in' ? s.unit : current.unit,
           inchPrecision: (INCH_PRECISIONS as readonly number[]).includes(s.inchPrecision ?? 0) ? (s.inchPrecision as EditorInchPrecision) : current.inchPrecision,
           mmPrecision: (MM_PRECISIONS as readonly number[]).includes(s.mmPrecision ?? 0) ? (s.mmPrecision as EditorMmPrecision) : current.mmPrecision,
