@@ -1,0 +1,67 @@
+import type { Vec3 } from '../../shared/engine/types.ts';
+import { useEditorStore, type ViewName } from '../state/useEditorStore.ts';
+import { useLength } from '../state/useLength.ts';
+
+const VIEWS: { view: ViewName; label: string }[] = [
+  { view: 'three-quarter', label: '¾' },
+  { view: 'front', label: 'Front' },
+  { view: 'side', label: 'Side' },
+  { view: 'top', label: 'Top' },
+];
+
+const AXES = [
+  { axis: 'y', label: 'Front to back', index: 1 },
+  { axis: 'x', label: 'Side to side', index: 0 },
+  { axis: 'z', label: 'Top down', index: 2 },
+] as const;
+
+/** Preset views, the explode slider and the cut-away plane, under the 3D view. */
+export function ViewControls({ bboxMin, bboxSize }: { bboxMin: Vec3; bboxSize: Vec3 }) {
+  const view = useEditorStore((s) => s.view);
+  const explode = useEditorStore((s) => s.explode);
+  const cutaway = useEditorStore((s) => s.cutaway);
+  const { setView, setExplode, setCutaway } = useEditorStore.getState();
+  const length = useLength();
+  const axis = AXES.find((a) => a.axis === cutaway?.axis);
+  const lo = axis ? bboxMin[axis.index] : 0;
+  const hi = axis ? bboxMin[axis.index] + bboxSize[axis.index] : 1;
+
+  return (
+    <div className="flex flex-wrap items-center gap-x-5 gap-y-2 border-t border-rule bg-sheet px-3 py-2 text-xs">
+      <div role="group" aria-label="Preset view" className="flex overflow-hidden rounded-sm border border-graphite">
+        {VIEWS.map((v) => (
+          <button key={v.view} type="button" aria-pressed={view === v.view} onClick={() => setView(v.view)}
+            className={`px-2 py-1 ${view === v.view ? 'bg-graphite text-sheet' : 'hover:bg-paper-deep'}`}>
+            {v.label}
+          </button>
+        ))}
+      </div>
+      <label className="flex items-center gap-2">
+        <span className="text-graphite-soft">Explode</span>
+        <input type="range" min={0} max={1} step={0.05} value={explode} onChange={(e) => setExplode(Number(e.target.value))} className="w-28 accent-[var(--color-pencil)]" aria-valuetext={`${Math.round(explode * 100)} %`} />
+        <span className="dim w-8 text-right">{Math.round(explode * 100)}%</span>
+      </label>
+      <div className="flex items-center gap-2">
+        <label htmlFor="cutaway-axis" className="text-graphite-soft">Cut-away</label>
+        <select id="cutaway-axis" className="rounded-sm border border-rule bg-sheet px-1 py-0.5"
+          value={cutaway?.axis ?? ''}
+          onChange={(e) => {
+            const next = AXES.find((a) => a.axis === e.target.value);
+            setCutaway(next ? { axis: next.axis, positionMm: bboxMin[next.index] + bboxSize[next.index] / 2 } : null);
+          }}>
+          <option value="">Off</option>
+          {AXES.map((a) => <option key={a.axis} value={a.axis}>{a.label}</option>)}
+        </select>
+        {cutaway && axis && (
+          <label className="flex items-center gap-2">
+            <span className="sr-only">Section position</span>
+            <input type="range" min={lo} max={hi} step={0.5} value={cutaway.positionMm}
+              onChange={(e) => setCutaway({ axis: cutaway.axis, positionMm: Number(e.target.value) })}
+              className="w-28 accent-[var(--color-pencil)]" aria-valuetext={length(cutaway.positionMm - lo)} />
+            <span className="dim w-16">{length(cutaway.positionMm - lo)}</span>
+          </label>
+        )}
+      </div>
+    </div>
+  );
+}
