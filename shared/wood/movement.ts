@@ -58,7 +58,7 @@ export interface WidthChange {
   /** True when both moisture contents lie within 6–14 %, where WH2010 Eq. 13-2 is published. */
   withinPublishedRange: boolean;
   method: 'linear' | 'total-shrinkage';
-  /** True when the species' coefficients are unconfirmed: show the result as approximate. */
+  /** True when the coefficients or the form used are unconfirmed: show the result as approximate. */
   approximate: boolean;
   note?: string;
 }
@@ -128,8 +128,8 @@ export function widthChange(input: WidthChangeInput): WidthChange {
   const note =
     `Outside ${LINEAR_RANGE.min}–${LINEAR_RANGE.max} % moisture content, where WH2010 Eq. 13-2 is published; ` +
     `used the total-shrinkage form with ${direction} shrinkage ${shrinkagePercent} % (WH2010 Table 4-3), approximate.`;
-  const shrinkageApproximate = approximate || isApproximate(species.source.totalShrinkage);
-  return result(changeMm, direction, effective, false, 'total-shrinkage', shrinkageApproximate, note);
+  // The form itself is recalled, not read in the source, so its result is always approximate.
+  return result(changeMm, direction, effective, false, 'total-shrinkage', true, note);
 }
 
 function result(

@@ -1,7 +1,10 @@
 import type { Command } from 'commander';
+import { registerEmc } from './emc.ts';
+import { registerFloat } from './float.ts';
+import { registerMovement } from './movement.ts';
 
 /** A command registers itself (name, options, action) on the program. */
 export type RegisterCommand = (program: Command) => void;
 
 /** Every command of the command line, in the order `--help` lists them. */
-export const commands: RegisterCommand[] = [];
+export const commands: RegisterCommand[] = [registerEmc, registerMovement, registerFloat];
