@@ -58,22 +58,72 @@ export interface Assembled {
 
 const round6 = (n: number): number => Math.round(n * 1e6) / 1e6;
 
+// A compact key of plain data with numbers rounded to 1e-6 mm, so binary noise never splits
+// identical parts.
+function key(value: unknown): string {
+  if (typeof value === 'number') return String(round6(value));
+  if (Array.isArray(value)) return `[${value.map(key).join(',')}]`;
+  if (value && typeof value === 'object') return `{${Object.entries(value).map(([k, v]) => `${k}:${key(v)}`).join(',')}}`;
+  return String(value);
+}
+
 function signature(draft: PartDraft, features: readonly Feature[]): string {
   const material = draft.material.kind === 'solid' ? draft.material.speciesId : draft.material.sheetId;
-  return JSON.stringify([draft.role, material, draft.grain, draft.size.map(round6), draft.glueUp?.boards ?? 0, features], (_key, value: unknown) =>
-    typeof value === 'number' ? round6(value) : value,
-  );
+  return `${draft.role}|${material}|${draft.grain}|${key(draft.size)}|${draft.glueUp?.boards ?? 0}|${key(features)}`;
+}
+
+/** The same part turned end for end about its thickness axis: still a rotation. */
+function turned(axes: AxisMap): AxisMap {
+  const flip = (a: AxisMap['length']) => `${a[0] === '+' ? '-' : '+'}${a[1]}` as AxisMap['length'];
+  return { length: flip(axes.length), width: flip(axes.width), thickness: axes.thickness };
+}
+
+/** Features of `draft` in its frame for `axes`, with templated ids filled in. */
+function describeAll(draft: PartDraft, axes: AxisMap): { features: Feature[]; ids: Map<string, string> } {
+  const described = draft.features.map((f) => describeFeature(f, draft.size, axes, draft.world.min));
+  const ids = new Map<string, string>();
+  const counters = new Map<string, number>();
+  const order = described
+    .map((feature, i) => ({ feature, draft: draft.features[i]! }))
+    .sort((a, b) => {
+      const ra = a.feature.removed[0] ?? (a.feature.type === 'tongue' ? a.feature.tongue : undefined);
+      const rb = b.feature.removed[0] ?? (b.feature.type === 'tongue' ? b.feature.tongue : undefined);
+      return (ra?.min[0] ?? 0) - (rb?.min[0] ?? 0) || (ra?.min[1] ?? 0) - (rb?.min[1] ?? 0) || (ra?.min[2] ?? 0) - (rb?.min[2] ?? 0);
+    });
+  const renamed = new Map<Feature, Feature>();
+  for (const { feature, draft: fd } of order) {
+    let id = fd.id;
+    if (fd.idTemplate) {
+      const n = (counters.get(fd.idTemplate) ?? 0) + 1;
+      counters.set(fd.idTemplate, n);
+      id = fd.idTemplate.replace('{face}', feature.face).replace('{n}', String(n));
+    }
+    ids.set(fd.id, id);
+    renamed.set(feature, id === feature.id ? feature : { ...feature, id });
+  }
+  const features = described.map((f) => renamed.get(f)!).sort((a, b) => (a.id < b.id ? -1 : a.id > b.id ? 1 : 0));
+  return { features, ids };
 }
 
 /** Merges identical instances into parts and resolves joints to part ids. */
 export function assemble(drafts: readonly PartDraft[], joints: readonly JointDraft[], roughFor: RoughSizer): Assembled {
+  // Each instance is read both ways round about its thickness axis and takes the reading that
+  // sorts first, so a panel and its turned twin come out as one part.
   const classes = new Map<string, { drafts: PartDraft[]; features: Feature[] }>();
+  const chosen = new Map<PartDraft, { axes: AxisMap; ids: Map<string, string> }>();
   for (const draft of drafts) {
-    const features = draft.features.map((f) => describeFeature(f, draft.size, draft.axes, draft.world.min));
-    const key = `${draft.group}|${signature(draft, features)}`;
-    const existing = classes.get(key);
+    const a = describeAll(draft, draft.axes);
+    const sigA = signature(draft, a.features);
+    const other = turned(draft.axes);
+    const b = describeAll(draft, other);
+    const sigB = signature(draft, b.features);
+    const useB = sigB < sigA;
+    const pick = useB ? b : a;
+    chosen.set(draft, { axes: useB ? other : draft.axes, ids: pick.ids });
+    const classKey = `${draft.group}|${useB ? sigB : sigA}`;
+    const existing = classes.get(classKey);
     if (existing) existing.drafts.push(draft);
-    else classes.set(key, { drafts: [draft], features });
+    else classes.set(classKey, { drafts: [draft], features: pick.features });
   }
 
   const parts: Part[] = [];
@@ -91,7 +141,7 @@ export function assemble(drafts: readonly PartDraft[], joints: readonly JointDra
     parts.push({ ...body, rough: roughFor(body), quantity: same.length });
     same.forEach((draft, instance) => {
       partIdOf.set(draft, id);
-      placements.push(placeInto(id, instance, draft.label, draft.size, draft.axes, draft.world, draft.explodeMm));
+      placements.push(placeInto(id, instance, draft.label, draft.size, chosen.get(draft)!.axes, draft.world, draft.explodeMm));
     });
   }
 
@@ -99,7 +149,9 @@ export function assemble(drafts: readonly PartDraft[], joints: readonly JointDra
   for (const j of joints) {
     const a = partIdOf.get(j.a.draft)!;
     const b = partIdOf.get(j.b.draft)!;
-    const key = JSON.stringify([j.type, a, j.a.featureIds, b, j.b.featureIds, round6(j.clearanceMm)]);
+    const aFeatures = j.a.featureIds.map((id) => chosen.get(j.a.draft)!.ids.get(id) ?? id);
+    const bFeatures = j.b.featureIds.map((id) => chosen.get(j.b.draft)!.ids.get(id) ?? id);
+    const key = `${j.type}|${a}|${aFeatures.join(',')}|${b}|${bFeatures.join(',')}|${round6(j.clearanceMm)}`;
     const existing = byKey.get(key);
     if (existing) {
       byKey.set(key, { ...existing, count: existing.count + 1 });
@@ -108,7 +160,7 @@ export function assemble(drafts: readonly PartDraft[], joints: readonly JointDra
     byKey.set(key, {
       id: `${a}:${b}:${j.type}`,
       type: j.type,
-      members: [{ partId: a, featureIds: j.a.featureIds }, { partId: b, featureIds: j.b.featureIds }],
+      members: [{ partId: a, featureIds: aFeatures }, { partId: b, featureIds: bFeatures }],
       count: 1, clearanceMm: j.clearanceMm, glued: j.glued, floating: j.floating, note: j.note,
     });
   }

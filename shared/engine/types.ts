@@ -330,7 +330,7 @@ export interface CutListGroup {
 
 /** A router-table or saw set-up for one feature. */
 export interface SetUp {
-  tool: 'router table' | 'table saw' | 'drill press' | 'chisel';
+  tool: 'router table' | 'table saw' | 'drill press' | 'router' | 'handsaw' | 'chisel';
   /** What to set and to what, e.g. `bit height` → 9.5 mm. */
   settings: readonly { name: string; valueMm: number }[];
   note: string;

@@ -103,7 +103,7 @@ export function bottomOnCleats(o: BottomOnCleatsOptions): BottomOnCleats {
       const a: [number, number, number] = long ? [s - r, back, zc - r] : [back, s - r, zc - r];
       const b: [number, number, number] = long ? [s + r, face, zc + r] : [face, s + r, zc + r];
       return {
-        id: `hole-${i + 1}`, type: 'hole', label: 'screw clearance hole into the rail', faceDir: `${inward > 0 ? '+' : '-'}${long ? 'Y' : 'X'}` as WorldAxis,
+        id: `hole-${i + 1}`, idTemplate: 'hole-{n}', type: 'hole', label: 'screw clearance hole into the rail', faceDir: `${inward > 0 ? '+' : '-'}${long ? 'Y' : 'X'}` as WorldAxis,
         removed: [boxBetween(a, b)], diameterMm: o.screwDiameterMm,
       };
     });

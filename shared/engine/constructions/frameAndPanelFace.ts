@@ -139,7 +139,7 @@ export function frameAndPanelFace(o: FrameAndPanelFaceOptions): FrameAndPanelFac
       const removed = [box(u0, u1, v0, v1, wIn, bandLo), box(u0, u1, v0, v1, bandHi, wOut)];
       if (stop > 0) removed.push(box(u0, u1, haunchV[0], haunchV[1], bandLo, bandHi));
       return {
-        id: `tongue-${end === 'a' ? 'left' : 'right'}`, type: 'tongue', label: `stub tenon into the ${end === 'a' ? 'left' : 'right'} post`,
+        id: `tongue-${end === 'a' ? 'left' : 'right'}`, idTemplate: 'tongue-{face}', type: 'tongue', label: 'stub tenon into the leg groove',
         faceDir: dir(end === 'a' ? '-u' : '+u'), removed: removed.map(toWorld),
         tongue: toWorld(box(u0, u1, tongueV[0], tongueV[1], bandLo, bandHi)),
       };
@@ -180,15 +180,15 @@ export function frameAndPanelFace(o: FrameAndPanelFaceOptions): FrameAndPanelFac
     const tongue = (end: 'bottom' | 'top'): FeatureDraft => {
       const [v0, v1] = end === 'bottom' ? [s0, pz0] : [pz1, s1];
       return {
-        id: `tongue-${end}`, type: 'tongue', label: `stub tenon into the ${end} rail`,
+        id: `tongue-${end}`, idTemplate: 'tongue-{face}', type: 'tongue', label: 'stub tenon into a rail groove',
         faceDir: dir(end === 'bottom' ? '-v' : '+v'),
         removed: [box(us, ue, v0, v1, wIn, bandLo), box(us, ue, v0, v1, bandHi, wOut)].map(toWorld),
         tongue: toWorld(box(us + fgd, ue - fgd, v0, v1, bandLo, bandHi)),
       };
     };
     const grooves: FeatureDraft[] = [
-      { id: 'groove-left', type: 'groove', label: 'groove for the panel on its left', faceDir: dir('-u'), removed: [toWorld(box(us, us + fgd, s0, s1, bandLo, bandHi))] },
-      { id: 'groove-right', type: 'groove', label: 'groove for the panel on its right', faceDir: dir('+u'), removed: [toWorld(box(ue - fgd, ue, s0, s1, bandLo, bandHi))] },
+      { id: 'groove-left', idTemplate: 'groove-{face}', type: 'groove', label: 'groove for a panel', faceDir: dir('-u'), removed: [toWorld(box(us, us + fgd, s0, s1, bandLo, bandHi))] },
+      { id: 'groove-right', idTemplate: 'groove-{face}', type: 'groove', label: 'groove for a panel', faceDir: dir('+u'), removed: [toWorld(box(ue - fgd, ue, s0, s1, bandLo, bandHi))] },
     ];
     const draft: PartDraft = {
       group: `${o.groupId}/stile`, member: o.wall, label: `${o.wall} centre stile ${i + 1}`,
@@ -236,11 +236,11 @@ export function frameAndPanelFace(o: FrameAndPanelFaceOptions): FrameAndPanelFac
     const rabbeted = p.thicknessMm > gw + 1e-9;
     const features: FeatureDraft[] = edges.flatMap((e) => {
       const tongue: FeatureDraft = {
-        id: `tongue-${e.id}`, type: 'tongue', label: `tongue on the ${e.label}`, faceDir: dir(e.side),
+        id: `tongue-${e.id}`, idTemplate: 'tongue-{face}', type: 'tongue', label: 'tongue into a groove', faceDir: dir(e.side),
         removed: rabbeted ? [toWorld(e.rabbet)] : [], tongue: toWorld(e.tongue),
       };
       if (!rabbeted) return [tongue];
-      return [{ id: `rabbet-${e.id}`, type: 'rabbet', label: `rabbet on the ${e.label}, from the inside face, leaving the tongue`, faceDir: dir(e.side), removed: [toWorld(e.rabbet)] }, { ...tongue, removed: [] }];
+      return [{ id: `rabbet-${e.id}`, idTemplate: 'rabbet-{face}', type: 'rabbet', label: 'rabbet from the inside face, leaving the tongue', faceDir: dir(e.side), removed: [toWorld(e.rabbet)] }, { ...tongue, removed: [] }];
     });
     const horizontal = p.grain !== 'vertical';
     const world = toWorld(box(u0, u1, v0, v1, pwIn, bandHi));

@@ -11,7 +11,14 @@ import { localFaceOf, worldBoxToLocal, type AxisMap } from './placement.ts';
 
 /** A feature drawn in world coordinates, before it is mapped into its part. */
 export interface FeatureDraft {
+  /** Unique among the draft's features; joints refer to it. */
   id: string;
+  /**
+   * The id the feature takes in its part, when it should be named in the part's own terms:
+   * `{face}` becomes the local face (`tongue-{face}` → `tongue-end-a`), `{n}` the feature's
+   * 1-based order along the part among those with the same template. Default: `id`.
+   */
+  idTemplate?: string;
   type: FeatureType;
   label: string;
   /** World direction the cut face looks toward (out of the part). */

@@ -1,0 +1,30 @@
+/** The cut list: every part with finished and rough sizes, grouped by material. */
+import type { CutListGroup, CutListRow, Part, PartRole } from '../types.ts';
+
+const ROLE_ORDER: readonly PartRole[] = ['leg', 'rail', 'stile', 'panel', 'lid', 'batten', 'cleat', 'bottom'];
+
+/** The material a part is bought as, e.g. `White oak 4/4` or a sheet good's name. */
+export function materialLabel(part: Part): string {
+  return part.material.kind === 'solid' ? `${part.material.speciesName} ${part.rough.quarters}/4` : part.material.sheetName;
+}
+
+/** Groups parts by material (solid wood by species and stock thickness first, then sheets). */
+export function cutList(parts: readonly Part[]): CutListGroup[] {
+  const groups = new Map<string, { kind: 'solid' | 'sheet'; quarters: number; rows: CutListRow[] }>();
+  const sorted = [...parts].sort((a, b) => ROLE_ORDER.indexOf(a.role) - ROLE_ORDER.indexOf(b.role));
+  for (const part of sorted) {
+    const label = materialLabel(part);
+    const group = groups.get(label) ?? { kind: part.material.kind, quarters: part.rough.quarters, rows: [] };
+    group.rows.push({
+      partId: part.id, name: part.name, quantity: part.quantity,
+      finished: [part.lengthMm, part.widthMm, part.thicknessMm],
+      rough: [part.rough.lengthMm, part.rough.widthMm, part.rough.thicknessMm],
+      grain: part.grain,
+      notes: part.glueUp ? [...part.notes, `rough width covers ${part.glueUp.boards} boards of about ${Math.round(part.glueUp.boardWidthMm)} mm`] : part.notes,
+    });
+    groups.set(label, group);
+  }
+  return [...groups.entries()]
+    .sort(([, a], [, b]) => (a.kind === b.kind ? a.quarters - b.quarters : a.kind === 'solid' ? -1 : 1))
+    .map(([material, g]) => ({ material, materialKind: g.kind, rows: g.rows }));
+}

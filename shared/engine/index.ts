@@ -1,0 +1,52 @@
+/**
+ * The piece engine: `buildPiece` turns a spec into parts, joints, placements, checks and the
+ * outputs derived from them. Pure: plain data in, plain (frozen) data out, lengths in mm.
+ */
+import { InputError } from '../errors.ts';
+import { deriveOutputs } from './derived/index.ts';
+import { validateSpec } from './params.ts';
+import { buildChest } from './pieces/chest.ts';
+import type { PieceResult, PieceSpec } from './types.ts';
+
+export * from './types.ts';
+export { paramDefs, defaultSpec, validateSpec, PIECE_KINDS } from './params.ts';
+export type { ParamDef, ParamKind } from './params.ts';
+export { summarizeResult, compareResults } from './compare.ts';
+export type { ResultSummary, ResultComparison } from './compare.ts';
+
+/** Version of the engine's geometry and rules; stored beside each revision built with it. */
+export const ENGINE_VERSION = '0.1.0';
+
+const cache = new WeakMap<PieceSpec, PieceResult>();
+
+/**
+ * Checks `spec` (see `validateSpec`) and builds the piece. Throws an `InputError` naming the
+ * parameter and its limit for bad input; the same spec object is built once.
+ */
+export function buildPiece(spec: PieceSpec): PieceResult {
+  const cached = cache.get(spec);
+  if (cached) return cached;
+  const checked = validateSpec(spec);
+  let built;
+  switch (checked.kind) {
+    case 'chest':
+      built = buildChest(checked);
+      break;
+    default:
+      throw new InputError('kind', `the ${checked.kind} is not built by this version of the engine yet; available: chest`, 'chest');
+  }
+  const result: PieceResult = Object.freeze({
+    spec: checked,
+    kind: checked.kind,
+    engineVersion: ENGINE_VERSION,
+    parts: Object.freeze(built.parts),
+    joints: Object.freeze(built.joints),
+    placements: Object.freeze(built.placements),
+    checks: Object.freeze(built.checks),
+    bboxMm: built.bboxMm,
+    bboxMinMm: built.bboxMinMm,
+    derived: deriveOutputs(checked.kind, built.parts, built.joints),
+  });
+  cache.set(spec, result);
+  return result;
+}
