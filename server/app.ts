@@ -12,8 +12,16 @@ import type { Config } from './config.ts';
 import { apiNotFound, errorMiddleware } from './http/errorMiddleware.ts';
 import { healthRoutes } from './features/health/health.routes.ts';
 import { apiFeatures } from './features/index.ts';
+import { createAuth } from './auth/index.ts';
+import { modelsFor } from './db/models/index.ts';
+import type { MailCatcher } from './fakes/mailCatcher.ts';
+import { createSmtpMailer, type Mailer } from './features/mail/mailer.ts';
 
-export type AppDeps = { config: Config; sequelize: Sequelize };
+/**
+ * What the app is built from. `mailer` defaults to SMTP at `config.smtp`; `mailbox` is the local
+ * mail catcher (development and tests), whose messages `GET /api/dev/mail` lists.
+ */
+export type AppDeps = { config: Config; sequelize: Sequelize; mailer?: Mailer; mailbox?: MailCatcher };
 
 /** Largest JSON body the API accepts; a design spec is a few kilobytes. */
 export const JSON_BODY_LIMIT = '512kb';
@@ -43,7 +51,14 @@ export function createApp(deps: AppDeps): Express {
   const api: Router = express.Router();
   api.use(express.json({ limit: JSON_BODY_LIMIT }));
   api.use(healthRoutes(sequelize, config.dbTimeoutMs));
-  for (const mount of apiFeatures) mount(api, deps);
+  const models = modelsFor(sequelize);
+  const auth = createAuth(config, models);
+  api.use(...auth.middleware);
+  // The session store's pool, for whoever shuts the app down.
+  app.locals.sessionPool = auth.sessionPool;
+  const mailer = deps.mailer ?? createSmtpMailer(config.smtp);
+  const publicUrl = (config.publicUrl ?? `http://${config.host}:${config.port}`).replace(/\/$/, '');
+  for (const mount of apiFeatures) mount(api, { ...deps, models, auth, mailer, publicUrl });
   api.use(apiNotFound);
   app.use('/api', api);
 
