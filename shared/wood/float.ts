@@ -66,7 +66,9 @@ export interface PanelFloat {
   engagementAtBuildMm: number;
   engagementAtDriestMm: number;
   engagementMinMm: number;
+  engagementAtBuild: DualLength;
   engagementAtDriest: DualLength;
+  engagementMin: DualLength;
   check: FloatCheck;
   notes: string[];
 }
@@ -118,7 +120,9 @@ export function panelFloat(input: PanelFloatInput): PanelFloat {
     engagementAtBuildMm,
     engagementAtDriestMm,
     engagementMinMm,
+    engagementAtBuild: dual(engagementAtBuildMm, SHOW),
     engagementAtDriest: dual(engagementAtDriestMm, SHOW),
+    engagementMin: dual(engagementMinMm, SHOW),
     check: floatCheck({
       shortfallMm, gapEachSideMm, engagementAtDriestMm, engagementMinMm, clearanceMm, movement,
       grooveDepthMm: input.grooveDepthMm,

@@ -17,6 +17,8 @@ import type { SpeciesInput } from './resolve.ts';
  */
 export const SLOT_END_CLEARANCE_MM = MM_PER_INCH / 64;
 
+const SHOW = { inchPrecision: 64, mmPrecision: 0.1 } as const;
+
 /** Inputs for {@link fastenerSlotLength}. */
 export interface FastenerSlotInput {
   /** Distance across the grain from the fixed line to the screw, mm (0 on the line). */
@@ -46,6 +48,8 @@ export interface FastenerSlot {
    * line, mm: it has the driest-season travel on that side and the humid travel on the other.
    */
   screwFromNearEndMm: number;
+  /** The travel and the screw's place in the slot, ready to show. */
+  text: { travelToward: DualLength; travelAway: DualLength; screwFromNearEnd: DualLength };
   /** True when the travel is large enough that a plain clearance hole would bind. */
   needsSlot: boolean;
   approximate: boolean;
@@ -67,6 +71,7 @@ export function fastenerSlotLength(input: FastenerSlotInput): FastenerSlot {
   const toward = swing?.shrinkMm ?? 0;
   const away = swing?.swellMm ?? 0;
   const slotLengthMm = input.shankDiameterMm + toward + away + 2 * endClearanceMm;
+  const screwFromNearEndMm = endClearanceMm + toward + input.shankDiameterMm / 2;
   return {
     distanceFromFixedLineMm: distance,
     slotLengthMm,
@@ -74,7 +79,8 @@ export function fastenerSlotLength(input: FastenerSlotInput): FastenerSlot {
     slotLength: dual(slotLengthMm, { inchPrecision: 32, mmPrecision: 0.5 }),
     travelTowardFixedLineMm: toward,
     travelAwayMm: away,
-    screwFromNearEndMm: endClearanceMm + toward + input.shankDiameterMm / 2,
+    screwFromNearEndMm,
+    text: { travelToward: dual(toward, SHOW), travelAway: dual(away, SHOW), screwFromNearEnd: dual(screwFromNearEndMm, SHOW) },
     needsSlot: toward + away > 2 * endClearanceMm,
     approximate: swing?.approximate ?? false,
   };

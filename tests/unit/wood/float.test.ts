@@ -22,6 +22,7 @@ describe('panelFloat', () => {
     // 355.6 × 0.00248 × (8 − 6) = 1.763776 mm of shrinkage
     const expected = GROOVE_3_8 - float.gapEachSideMm - 1.763776 / 2;
     expect(Math.abs(float.engagementAtDriestMm - expected)).toBeLessThan(GAP_TOLERANCE_MM);
+    expect(float.engagementMin.text.in).toBe('3/16"');
   });
 
   it('reports the shortfall in mm and inches with the three fixes when the groove is too shallow', () => {

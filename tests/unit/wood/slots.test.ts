@@ -13,6 +13,8 @@ describe('fastenerSlotLength', () => {
     expect(Math.abs(slot.slotLengthMm - (SHANK_MM + 2 * 2.19 + 2 * SLOT_END_CLEARANCE_MM))).toBeLessThan(SLOT_TOLERANCE_MM);
     expect(Math.abs(slot.travelTowardFixedLineMm - 2.19)).toBeLessThan(SLOT_TOLERANCE_MM);
     expect(slot.needsSlot).toBe(true);
+    // 2.19 mm = 0.0862 in, nearest 1/64 in is 6/64 = 3/32 in
+    expect(slot.text.travelAway.text).toEqual({ mm: '2.2 mm', in: '3/32"' });
     expect(slot.slotLengthIn).toBeCloseTo(slot.slotLengthMm / 25.4, 12);
   });
 
