@@ -50,7 +50,7 @@ export function CutListTable({ groups }: { groups: readonly CutListGroup[] }) {
             <th scope="rowgroup" colSpan={7} className="px-2 py-1 text-left text-xs font-semibold uppercase tracking-wider text-graphite">
               {group.material}
             </th>
-            <td className="dim px-2 py-1 text-right text-xs font-semibold">{group.materialKind === 'solid' ? group.boardFeet.toFixed(2) : 'sheet'}</td>
+            <td className="dim whitespace-nowrap px-2 py-1 text-right text-xs font-semibold">{group.materialKind === 'solid' ? group.boardFeet.toFixed(2) : 'sheet'}</td>
           </tr>
           {group.rows.map((row) => (
             <PartRow key={row.partId} partId={row.partId} name={row.name}>
@@ -58,13 +58,13 @@ export function CutListTable({ groups }: { groups: readonly CutListGroup[] }) {
                 {row.name}
                 {row.notes.length > 0 && <span className="block text-[11px] text-graphite-faint">{row.notes.join('; ')}</span>}
               </td>
-              <td className="dim px-2 py-1 text-right">{row.quantity}</td>
-              <td className="dim px-2 py-1 text-right" data-col="length">{length(row.finished[0])}</td>
-              <td className="dim px-2 py-1 text-right">{length(row.finished[1])}</td>
-              <td className="dim px-2 py-1 text-right">{length(row.finished[2])}</td>
-              <td className="dim px-2 py-1 text-right text-graphite-soft">{row.rough.map((n) => length(n)).join(' × ')}</td>
-              <td className="px-2 py-1 text-xs text-graphite-soft">{GRAIN[row.grain]}</td>
-              <td className="dim px-2 py-1 text-right">{group.materialKind === 'solid' ? row.boardFeet.toFixed(2) : '—'}</td>
+              <td className="dim whitespace-nowrap px-2 py-1 text-right">{row.quantity}</td>
+              <td className="dim whitespace-nowrap px-2 py-1 text-right" data-col="length">{length(row.finished[0])}</td>
+              <td className="dim whitespace-nowrap px-2 py-1 text-right">{length(row.finished[1])}</td>
+              <td className="dim whitespace-nowrap px-2 py-1 text-right">{length(row.finished[2])}</td>
+              <td className="dim px-2 py-1 text-right text-xs text-graphite-soft">{row.rough.map((n) => length(n)).join(' × ')}</td>
+              <td className="whitespace-nowrap px-2 py-1 text-xs text-graphite-soft">{GRAIN[row.grain]}</td>
+              <td className="dim whitespace-nowrap px-2 py-1 text-right">{group.materialKind === 'solid' ? row.boardFeet.toFixed(2) : '—'}</td>
             </PartRow>
           ))}
         </tbody>

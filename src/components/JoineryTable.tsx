@@ -38,7 +38,7 @@ export function JoineryTable({ rows, parts }: { rows: readonly JoineryRow[]; par
             <td className="px-2 py-1 align-top">
               {name(row.parts[0])} <span className="text-graphite-faint">→</span> {name(row.parts[1])}
             </td>
-            <td className="dim px-2 py-1 text-right align-top">{row.count}</td>
+            <td className="dim whitespace-nowrap px-2 py-1 text-right align-top">{row.count}</td>
             <td className="px-2 py-1 align-top text-xs">
               {row.features.map((f) => (
                 <span key={`${f.partId}:${f.featureId}`} className="block">
@@ -54,7 +54,7 @@ export function JoineryTable({ rows, parts }: { rows: readonly JoineryRow[]; par
                 </span>
               ))}
             </td>
-            <td className="dim px-2 py-1 text-right align-top">{row.clearanceMm > 0 ? length(row.clearanceMm) : 'tight'}</td>
+            <td className="dim whitespace-nowrap px-2 py-1 text-right align-top">{row.clearanceMm > 0 ? length(row.clearanceMm) : 'tight'}</td>
             <td className="px-2 py-1 align-top text-xs">
               {row.floating ? <span className="font-semibold text-pencil">float — no glue</span> : row.glued ? 'glue' : 'dry / screws'}
             </td>

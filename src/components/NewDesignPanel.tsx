@@ -86,7 +86,7 @@ export function NewDesignPanel({ workshopId, designs, onClose }: { workshopId: s
             </select>
           )}
         </fieldset>
-        <TextField label="Title" placeholder="e.g. Hall chest in cherry" value={title} onChange={(e) => setTitle(e.target.value)} error={error ?? serverError} />
+        <TextField label="Title of the new design" placeholder="e.g. Hall chest in cherry" value={title} onChange={(e) => setTitle(e.target.value)} error={error ?? serverError} />
         <button type="submit" className="btn btn-primary justify-center" disabled={pending}>
           {pending ? 'Creating…' : 'Create and open'}
         </button>

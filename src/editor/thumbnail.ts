@@ -40,8 +40,9 @@ export function thumbnailOf(result: PieceResult, marginMm = 40): Thumbnail {
     const size = worldSize(placement.axes, [part.lengthMm, part.widthMm, part.thicknessMm]);
     return [{ partId: part.id, role: part.role, min: placement.positionMm, size }];
   });
-  // Painter's order: from the back, from the bottom, from the left.
-  boxes.sort((a, b) => b.min[1] + b.size[1] - (a.min[1] + a.size[1]) || a.min[2] - b.min[2] || a.min[0] - b.min[0]);
+  // Painter's order for a view from the front, above and to the right: back faces first, then
+  // low before high, left before right; a lid (front face furthest forward, top highest) last.
+  boxes.sort((a, b) => b.min[1] - a.min[1] || a.min[2] + a.size[2] - (b.min[2] + b.size[2]) || a.min[0] - b.min[0]);
 
   let minU = Infinity, minV = Infinity, maxU = -Infinity, maxV = -Infinity;
   const shapes = boxes.map(({ partId, role, min, size }) => {
