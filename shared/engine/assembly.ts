@@ -58,10 +58,12 @@ export interface Assembled {
 
 const round6 = (n: number): number => Math.round(n * 1e6) / 1e6;
 
-// A compact key of plain data with numbers rounded to 1e-6 mm, so binary noise never splits
-// identical parts.
+// A compact key of plain data with numbers snapped to 0.1 µm, so binary noise never splits
+// identical parts. The grid is offset by 0.3 of a step: inch fractions and 0.1 mm values land
+// on multiples of 1/8 step and never near a snapping boundary.
+const snap = (n: number): number => Math.round(n * 1e4 + 0.3);
 function key(value: unknown): string {
-  if (typeof value === 'number') return String(round6(value));
+  if (typeof value === 'number') return String(snap(value));
   if (Array.isArray(value)) return `[${value.map(key).join(',')}]`;
   if (value && typeof value === 'object') return `{${Object.entries(value).map(([k, v]) => `${k}:${key(v)}`).join(',')}}`;
   return String(value);
@@ -107,31 +109,39 @@ function describeAll(draft: PartDraft, axes: AxisMap): { features: Feature[]; id
 
 /** Merges identical instances into parts and resolves joints to part ids. */
 export function assemble(drafts: readonly PartDraft[], joints: readonly JointDraft[], roughFor: RoughSizer): Assembled {
-  // Each instance is read both ways round about its thickness axis and takes the reading that
-  // sorts first, so a panel and its turned twin come out as one part.
+  // An instance keeps its own orientation unless, turned end for end about its thickness axis,
+  // it matches a part already seen: so a panel and its turned twin come out as one part, while
+  // a leg still reads from its foot.
   const classes = new Map<string, { drafts: PartDraft[]; features: Feature[] }>();
   const chosen = new Map<PartDraft, { axes: AxisMap; ids: Map<string, string> }>();
   for (const draft of drafts) {
     const a = describeAll(draft, draft.axes);
-    const sigA = signature(draft, a.features);
-    const other = turned(draft.axes);
-    const b = describeAll(draft, other);
-    const sigB = signature(draft, b.features);
-    const useB = sigB < sigA;
-    const pick = useB ? b : a;
-    chosen.set(draft, { axes: useB ? other : draft.axes, ids: pick.ids });
-    const classKey = `${draft.group}|${useB ? sigB : sigA}`;
-    const existing = classes.get(classKey);
+    const keyA = `${draft.group}|${signature(draft, a.features)}`;
+    let pick = { key: keyA, axes: draft.axes, described: a };
+    if (!classes.has(keyA)) {
+      const other = turned(draft.axes);
+      const b = describeAll(draft, other);
+      const keyB = `${draft.group}|${signature(draft, b.features)}`;
+      if (classes.has(keyB)) pick = { key: keyB, axes: other, described: b };
+    }
+    chosen.set(draft, { axes: pick.axes, ids: pick.described.ids });
+    const existing = classes.get(pick.key);
     if (existing) existing.drafts.push(draft);
-    else classes.set(classKey, { drafts: [draft], features: pick.features });
+    else classes.set(pick.key, { drafts: [draft], features: pick.described.features });
   }
 
   const parts: Part[] = [];
   const placements: Placement[] = [];
   const partIdOf = new Map<PartDraft, string>();
+  const used = new Map<string, number>();
   for (const { drafts: same, features } of classes.values()) {
     const first = same[0]!;
-    const { id, name } = first.name(same.map((d) => d.member));
+    const named = first.name(same.map((d) => d.member));
+    // Two different parts may earn the same name (end panels and centre panels): number them.
+    const n = (used.get(named.id) ?? 0) + 1;
+    used.set(named.id, n);
+    const id = n === 1 ? named.id : `${named.id}-${n}`;
+    const name = n === 1 ? named.name : `${named.name} ${n}`;
     const body = {
       id, name, role: first.role, material: first.material, grain: first.grain,
       lengthMm: first.size[0], widthMm: first.size[1], thicknessMm: first.size[2],
