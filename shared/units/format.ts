@@ -6,13 +6,16 @@ import { assertNever } from '../assert.ts';
 import { MM_PER_INCH, type LengthUnit } from './length.ts';
 
 /** Inch precision is a denominator (1/16 in …); millimetre precision is a step in mm. */
-export type InchPrecision = 2 | 4 | 8 | 16 | 32 | 64;
+export type InchPrecision = 1 | 2 | 4 | 8 | 16 | 32 | 64;
 export type MmPrecision = 1 | 0.5 | 0.1;
 
 /** Options for {@link formatLength}. */
 export interface FormatLengthOptions {
   unit: LengthUnit;
-  /** For inches, the denominator (default 16); for millimetres, the step in mm (default 0.5). */
+  /**
+   * For inches, the denominator (default 16; 1 gives whole inches); for millimetres, the step
+   * in mm (default 0.5). A precision that does not belong to the unit falls back to its default.
+   */
   precision?: InchPrecision | MmPrecision;
 }
 
@@ -42,7 +45,7 @@ export function roundTo(value: number, step: number): number {
 }
 
 function inchDenominator(precision: FormatLengthOptions['precision']): InchPrecision {
-  const allowed: readonly number[] = [2, 4, 8, 16, 32, 64];
+  const allowed: readonly number[] = [1, 2, 4, 8, 16, 32, 64];
   return precision !== undefined && allowed.includes(precision) ? (precision as InchPrecision) : DEFAULT_INCH_PRECISION;
 }
 

@@ -18,7 +18,11 @@ export interface AirConditions {
   relativeHumidityPercent: number;
 }
 
-/** Temperatures the equation is used for, in °F; the °C limits are the same temperatures. */
+/**
+ * Temperatures the equation is used for, in °F (the °C limits are the same temperatures): the
+ * span of WH2010 Table 4-2 as recalled (from memory, approximate). Beyond it the fitted
+ * coefficients would be extrapolated, so the input is refused instead.
+ */
 export const EMC_TEMPERATURE_LIMITS_F = { min: 30, max: 210 } as const;
 
 interface Coefficients {

@@ -64,3 +64,9 @@ describe('roundTo', () => {
     expect(roundTo(444 * 0.1, 0.1)).toBe(44.4);
   });
 });
+
+describe('formatLength in whole inches', () => {
+  it('rounds to the nearest inch when the precision is 1', () => {
+    expect(formatLength(30.6 * MM_PER_INCH, { unit: 'in', precision: 1 })).toBe('31"');
+  });
+});
