@@ -1,4 +1,5 @@
 import type { Command } from 'commander';
+import { registerCutlist } from './cutlist.ts';
 import { registerEmc } from './emc.ts';
 import { registerFloat } from './float.ts';
 import { registerMovement } from './movement.ts';
@@ -7,4 +8,4 @@ import { registerMovement } from './movement.ts';
 export type RegisterCommand = (program: Command) => void;
 
 /** Every command of the command line, in the order `--help` lists them. */
-export const commands: RegisterCommand[] = [registerEmc, registerMovement, registerFloat];
+export const commands: RegisterCommand[] = [registerEmc, registerMovement, registerFloat, registerCutlist];

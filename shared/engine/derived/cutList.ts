@@ -20,7 +20,7 @@ export function cutList(parts: readonly Part[]): CutListGroup[] {
       finished: [part.lengthMm, part.widthMm, part.thicknessMm],
       rough: [part.rough.lengthMm, part.rough.widthMm, part.rough.thicknessMm],
       grain: part.grain,
-      notes: part.glueUp ? [...part.notes, `rough width covers ${part.glueUp.boards} boards of about ${Math.round(part.glueUp.boardWidthMm)} mm`] : part.notes,
+      notes: part.glueUp ? [...part.notes, `rough width allows for jointing ${part.glueUp.boards} boards`] : part.notes,
     });
     groups.set(label, group);
   }

@@ -1,7 +1,8 @@
 /** One line per feature for tables and drawings, in mm. */
 import type { Feature } from '../types.ts';
 
-const f1 = (n: number): string => `${Math.round(n * 10) / 10}`;
+// The small nudge keeps 6.35 from showing as 6.3 when binary noise leaves it at 6.3499999.
+const f1 = (n: number): string => `${Math.round(n * 10 + 1e-6) / 10}`;
 
 /** A short description of `feature` with its sizes, e.g. `groove 6.4 wide × 9.5 deep, 6.4 from edge-a side`. */
 export function featureSummary(feature: Feature): string {
