@@ -4,7 +4,9 @@
  */
 import type { RouteDef } from '../auth/access.ts';
 import { authRoutes } from './auth/auth.routes.ts';
+import { commentRoutes } from './comments/comments.routes.ts';
 import type { FeatureDeps } from './context.ts';
+import { designRoutes } from './designs/designs.routes.ts';
 import { invitationRoutes } from './invitations/invitations.routes.ts';
 import { mailRoutes } from './mail/mail.routes.ts';
 import { workshopRoutes } from './workshops/workshops.routes.ts';
@@ -14,6 +16,8 @@ export function apiRouteTable(deps: FeatureDeps): RouteDef[] {
     ...authRoutes(deps),
     ...workshopRoutes(deps),
     ...invitationRoutes(deps),
+    ...designRoutes(deps),
+    ...commentRoutes(deps),
     // The mail catcher's inbox exists only outside production, when the app runs one.
     ...(deps.mailbox && !deps.config.isProduction ? mailRoutes(deps.mailbox) : []),
   ];

@@ -121,3 +121,11 @@ export async function waitForMail(mailbox: MailCatcher, to: string, count = 1): 
 export function chestSpec(params: Record<string, unknown> = {}) {
   return { schemaVersion: 1 as const, kind: 'chest' as const, params };
 }
+
+/** Reads the newest invitation link sent to an address from the app's mail catcher. */
+export function invitationTokens(mailbox: MailCatcher) {
+  return async (email: string): Promise<string> => {
+    await waitForMail(mailbox, email);
+    return tokenFromMail(mailbox, email, /invitations\/([A-Za-z0-9_-]{43})/);
+  };
+}
