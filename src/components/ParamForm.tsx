@@ -12,8 +12,8 @@ export function ParamForm({ defs, spec, readOnly, engineError }: { defs: readonl
   const sealStep = useEditorStore((s) => s.sealStep);
   return (
     <form aria-label="Parameters" onSubmit={(e) => e.preventDefault()} className="divide-y divide-rule">
-      {groupParams(defs).map((group, index) => (
-        <details key={group.id} open={index < 3 || group.defs.some((d) => d.key === engineError?.field)} className="group py-1">
+      {groupParams(defs).map((group) => (
+        <details key={group.id} open className="group py-1">
           <summary className="flex cursor-pointer select-none items-center justify-between py-1.5 text-xs font-semibold uppercase tracking-[0.14em] text-graphite-soft hover:text-pencil">
             <span id={group.id}>{group.title}</span>
             <span aria-hidden="true" className="font-mono text-[10px] transition-transform group-open:rotate-90">▸</span>

@@ -127,8 +127,8 @@ function Editor({ design, role, workshops, approvals }: { design: DesignData; ro
       {canReview && <ReviewBar designId={design.id} revision={baseRevision} approval={design.approval} />}
       {!canEdit && !canReview && <p className="border-b border-rule bg-paper-deep/60 px-4 py-1.5 text-xs">You can look at this design but not change it.</p>}
 
-      <div className="grid min-h-0 flex-1 grid-cols-[17.5rem_minmax(0,1fr)] xl:grid-cols-[19rem_minmax(0,1fr)_21rem]">
-        <aside aria-label="Parameters" className="row-span-2 min-h-0 overflow-y-auto border-r border-rule bg-sheet/60 px-3 py-2 xl:row-span-1 xl:max-h-[calc(100vh-7.5rem)]">
+      <div className="grid min-h-0 flex-1 grid-cols-[17.5rem_minmax(0,1fr)] xl:h-[calc(100vh-7rem)] xl:grid-cols-[19rem_minmax(0,1fr)_21rem]">
+        <aside aria-label="Parameters" className="row-span-2 min-h-0 overflow-y-auto border-r border-rule bg-sheet/60 px-3 py-2 xl:row-span-1">
           {!canEdit && <p className="mb-2 rounded-sm bg-paper-deep px-2 py-1 text-xs text-graphite-soft">Read-only: the values of revision {baseRevision}.</p>}
           {engineError && (
             <p role="alert" className="mb-2 rounded-sm border border-pencil/60 bg-pencil-soft/50 px-2 py-1 text-xs">
@@ -138,7 +138,7 @@ function Editor({ design, role, workshops, approvals }: { design: DesignData; ro
           <ParamForm defs={defs} spec={spec} readOnly={!canEdit} engineError={engineError} />
         </aside>
 
-        <section aria-label="Piece" className="flex min-h-0 min-w-0 flex-col">
+        <section aria-label="Piece" className="flex min-h-0 min-w-0 flex-col xl:overflow-hidden">
           {result ? (
             <>
               <div className="relative h-[44vh] min-h-[260px] border-b border-rule bg-paper">
@@ -151,7 +151,7 @@ function Editor({ design, role, workshops, approvals }: { design: DesignData; ro
                 )}
               </div>
               <ViewControls bboxMin={result.bboxMinMm} bboxSize={result.bboxMm} />
-              <div className="min-h-[16rem] flex-1 overflow-hidden bg-sheet">
+              <div className="flex min-h-[16rem] flex-1 flex-col overflow-hidden bg-sheet">
                 <ResultTables result={result} spec={spec} readOnly={!canEdit} />
               </div>
             </>
@@ -160,7 +160,7 @@ function Editor({ design, role, workshops, approvals }: { design: DesignData; ro
           )}
         </section>
 
-        <aside aria-label="Revisions and comments" className="col-start-2 flex min-h-[22rem] flex-col border-l border-t border-rule bg-sheet/60 xl:col-start-3 xl:row-start-1 xl:max-h-[calc(100vh-7.5rem)] xl:border-t-0">
+        <aside aria-label="Revisions and comments" className="col-start-2 flex min-h-[22rem] flex-col border-l border-t border-rule bg-sheet/60 xl:col-start-3 xl:row-start-1 xl:min-h-0 xl:border-t-0">
           <Tabs label="Design history and discussion" idPrefix="side" active={side} onChange={setSide}
             tabs={[{ key: 'history', label: 'History' }, { key: 'comments', label: 'Comments' }, { key: 'fork', label: 'Fork' }]} />
           <TabPanel idPrefix="side" tabKey={side} className="flex min-h-0 flex-1 flex-col">
