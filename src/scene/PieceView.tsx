@@ -1,0 +1,163 @@
+/**
+ * The live 3D view of a piece: every part as a solid in its wood, joinery cut into it, with
+ * orbit, pan and zoom, preset views, an exploded view, a cut-away and part selection.
+ *
+ * Default export so pages can `React.lazy(() => import('../scene/PieceView.tsx'))` and keep
+ * three.js out of their own chunk; nothing outside src/scene imports three.
+ *
+ * Props:
+ *  - `result`: the engine's answer (shared/engine `buildPiece`). The view never recomputes
+ *    what the engine knows; a new result redraws only the parts whose shape changed.
+ *  - `selectedPartId` / `onSelectPart`: the selected part (every instance of it is drawn with a
+ *    pencil-red glow and outline). Clicking a part selects it; clicking empty space gives null.
+ *    A press that turns into an orbit drag does not select.
+ *  - `hoveredPartId` / `onHoverPart` (optional): the part under the pointer, lightly tinted.
+ *    Pass both to control hover from outside (e.g. a table row under the pointer); leave
+ *    `hoveredPartId` undefined and the view tracks hover itself.
+ *  - `explode`: 0 = assembled … 1 = fully exploded; each part moves `Placement.explodeMm × explode`.
+ *  - `cutaway`: null, or a section plane across engine axis `x`, `y` or `z` at `positionMm`
+ *    (engine world, mm). It takes away the part of the piece on the side of the preset view that
+ *    looks along that axis (`y`: the front, `x`: the right side, `z`: the top) and paints the cut
+ *    faces a darker tone, so tongues show in their grooves.
+ *  - `view`: the preset camera; changing it glides the camera there. Orbiting leaves it alone.
+ *  - `className`: sizing of the wrapper; the canvas fills it.
+ *
+ * For tests: the wrapper is `[data-testid="piece-view"]` with `data-part-count` (instances drawn)
+ * and `data-selected-part`; the canvas keeps its drawing buffer (pixels can be sampled) and
+ * carries `data-camera-settled="true"` once a preset view has been reached.
+ */
+import { useEffect, useMemo, useState } from 'react';
+import { Canvas, useThree } from '@react-three/fiber';
+import { OrbitControls } from '@react-three/drei';
+import { Plane, Vector3 } from 'three';
+import type { PieceResult } from '../../shared/engine/types.ts';
+import { CameraRig } from './CameraRig.tsx';
+import { CAMERA_FOV_DEG, type PresetView } from './cameraPresets.ts';
+import { PartMesh } from './PartMesh.tsx';
+import { createPartSolidCache } from './partGeometry.ts';
+import { ENGINE_TO_THREE_ROTATION_X, SCENE_SCALE } from './sceneFrame.ts';
+import { sceneModel } from './sceneModel.ts';
+import { SectionCaps, sectionRenderOrder } from './SectionCaps.tsx';
+import { sectionHatches } from './sectionHatch.ts';
+import { keptBySection, sectionPlane, type Cutaway } from './sectionPlane.ts';
+import { PAPER_HEX, StageLights } from './StageLights.tsx';
+import { createWoodMaterials, type Highlight } from './woodMaterials.ts';
+
+export type { PresetView } from './cameraPresets.ts';
+export type { Cutaway } from './sectionPlane.ts';
+
+export interface PieceViewProps {
+  result: PieceResult;
+  selectedPartId: string | null;
+  onSelectPart: (partId: string | null) => void;
+  hoveredPartId?: string | null;
+  onHoverPart?: (partId: string | null) => void;
+  explode: number;
+  cutaway: null | Cutaway;
+  view: PresetView;
+  className?: string;
+}
+
+/** Clipping is per renderer in three; the view's materials carry the plane. */
+function EnableLocalClipping() {
+  const gl = useThree((s) => s.gl);
+  useEffect(() => {
+    gl.localClippingEnabled = true;
+  }, [gl]);
+  return null;
+}
+
+function PieceScene(props: PieceViewProps) {
+  const { result, selectedPartId, onSelectPart, explode, cutaway, view } = props;
+  const invalidate = useThree((s) => s.invalidate);
+  const [ownHover, setOwnHover] = useState<string | null>(null);
+  const hovered = props.hoveredPartId !== undefined ? props.hoveredPartId : ownHover;
+  const onHover = (partId: string | null): void => {
+    if (partId === hovered) return;
+    if (props.hoveredPartId === undefined) setOwnHover(partId);
+    props.onHoverPart?.(partId);
+  };
+
+  const solids = useMemo(() => createPartSolidCache(), []);
+  const materials = useMemo(() => createWoodMaterials(), []);
+  const plane = useMemo(() => new Plane(), []);
+  useEffect(() => () => {
+    solids.dispose();
+    materials.dispose();
+  }, [solids, materials]);
+
+  const model = useMemo(() => sceneModel(result, { explode }), [result, explode]);
+  const assembledBounds = useMemo(() => sceneModel(result, { explode: 0 }).bounds, [result]);
+  const partsById = useMemo(() => new Map(result.parts.map((p) => [p.id, p])), [result]);
+  const hatches = useMemo(() => sectionHatches(result), [result]);
+  // Free the solids of parts the new result no longer has (after it is drawn, never before).
+  useEffect(() => {
+    solids.retainOnly(result.parts);
+  }, [solids, result]);
+
+  const section = useMemo(() => (cutaway ? sectionPlane(cutaway) : null), [cutaway]);
+  useEffect(() => {
+    if (section) plane.set(new Vector3(...section.normal), section.constant);
+    materials.setClipping(section ? plane : null);
+    invalidate();
+  }, [section, plane, materials, invalidate]);
+  const isVisibleAt = useMemo(
+    () => (point: Vector3): boolean => !section || keptBySection(section, [point.x, point.y, point.z]),
+    [section],
+  );
+
+  const highlightOf = (partId: string): Highlight => (partId === selectedPartId ? 'selected' : partId === hovered ? 'hover' : 'none');
+
+  return (
+    <>
+      <EnableLocalClipping />
+      <color attach="background" args={[PAPER_HEX]} />
+      <StageLights bounds={assembledBounds} />
+      <group rotation-x={ENGINE_TO_THREE_ROTATION_X} scale={SCENE_SCALE}>
+        {model.meshes.map((mesh, index) => {
+          const part = partsById.get(mesh.partId)!;
+          const highlight = highlightOf(mesh.partId);
+          return (
+            <PartMesh
+              key={mesh.key}
+              mesh={mesh}
+              solid={solids.get(part)}
+              material={materials.wood({ toneHex: mesh.toneHex, texture: mesh.materialKind === 'solid' ? 'grain' : 'sheet', highlight })}
+              outline={materials.outline(highlight)}
+              section={section ? { back: materials.stencilCounter('back'), front: materials.stencilCounter('front'), renderOrder: sectionRenderOrder(index) } : null}
+              isVisibleAt={isVisibleAt}
+              onSelect={onSelectPart}
+              onHover={onHover}
+            />
+          );
+        })}
+      </group>
+      {section && <SectionCaps plane={section} bounds={model.bounds} meshes={model.meshes} hatches={hatches} materials={materials} />}
+      <OrbitControls makeDefault enableDamping={false} zoomToCursor />
+      <CameraRig view={view} bounds={assembledBounds} framingKey={result.kind} />
+    </>
+  );
+}
+
+export default function PieceView(props: PieceViewProps) {
+  const { className, onSelectPart, selectedPartId } = props;
+  const instanceCount = props.result.placements.length;
+  return (
+    <div className={className} style={{ position: 'relative', width: '100%', height: '100%', minHeight: 240 }} data-testid="piece-view" data-part-count={instanceCount} data-selected-part={selectedPartId ?? ''}>
+      <Canvas
+        frameloop="demand"
+        flat
+        shadows="percentage"
+        dpr={[1, 2]}
+        gl={{ preserveDrawingBuffer: true, antialias: true, stencil: true }}
+        camera={{ fov: CAMERA_FOV_DEG, near: 0.01, far: 200, position: [0, 1, 3] }}
+        onPointerMissed={() => onSelectPart(null)}
+        style={{ position: 'absolute', inset: 0 }}
+        aria-label="3D view of the piece: drag to orbit, right-drag to pan, scroll to zoom; click a part to select it"
+        role="img"
+      >
+        <PieceScene {...props} />
+      </Canvas>
+    </div>
+  );
+}
