@@ -62,7 +62,7 @@ export function CutListTable({ groups }: { groups: readonly CutListGroup[] }) {
               <td className="dim whitespace-nowrap px-2 py-1 text-right" data-col="length">{length(row.finished[0])}</td>
               <td className="dim whitespace-nowrap px-2 py-1 text-right">{length(row.finished[1])}</td>
               <td className="dim whitespace-nowrap px-2 py-1 text-right">{length(row.finished[2])}</td>
-              <td className="dim px-2 py-1 text-right text-xs text-graphite-soft">{row.rough.map((n) => length(n)).join(' × ')}</td>
+              <td className="dim whitespace-nowrap px-2 py-1 text-right text-[11px] text-graphite-soft">{row.rough.map((n) => length(n)).join(' × ')}</td>
               <td className="whitespace-nowrap px-2 py-1 text-xs text-graphite-soft">{GRAIN[row.grain]}</td>
               <td className="dim whitespace-nowrap px-2 py-1 text-right">{group.materialKind === 'solid' ? row.boardFeet.toFixed(2) : '—'}</td>
             </PartRow>
