@@ -4,6 +4,7 @@ import { paramDefs } from '../../shared/engine/params.ts';
 import type { PieceResult } from '../../shared/engine/types.ts';
 import { can } from '../../shared/permissions.ts';
 import { useApprovals } from '../api/useApprovals.ts';
+import { useArchiveDesign } from '../api/useArchiveDesign.ts';
 import { useDesign } from '../api/useDesign.ts';
 import { useMe } from '../api/useMe.ts';
 import { ApprovalBadge } from '../components/ApprovalBadge.tsx';
@@ -64,6 +65,7 @@ function Editor({ design, role, workshops, approvals }: { design: DesignData; ro
   const [side, setSide] = useState<SideTab>('history');
   const canEdit = can(role, 'design.edit');
   const canReview = can(role, 'approval.decide');
+  const archive = useArchiveDesign(design.id);
 
   const spec = history?.present ?? design.headRevision.spec;
   const settled = useDebouncedValue(spec, APPLY_DELAY_MS);
@@ -122,8 +124,16 @@ function Editor({ design, role, workshops, approvals }: { design: DesignData; ro
             <button type="button" className="btn px-2" onClick={redo} disabled={!history?.future.length} title="Redo (Ctrl+Shift+Z or Ctrl+Y)" aria-label="Redo">↷</button>
           </div>
         )}
+        {can(role, 'design.archive') && (
+          <button type="button" className="btn" disabled={archive.isPending} onClick={() => archive.mutate(!design.archived)}
+            title={design.archived ? 'Show it in the workshop again' : 'Hide it from the workshop; its history is kept'}>
+            {design.archived ? 'Unarchive' : 'Archive'}
+          </button>
+        )}
+        {design.archived && <span className="rounded-sm bg-graphite px-1.5 py-0.5 text-[11px] uppercase tracking-widest text-sheet">Archived</span>}
         {canEdit && <SaveBar designId={design.id} workshopId={design.workshopId} title={design.title} spec={spec} dirty={dirty} buildable={typedOutcome.ok} />}
       </header>
+      {archive.error && <ErrorNotice title="Could not change the archive state" error={archive.error} className="mx-4 mt-2" />}
       {canReview && <ReviewBar designId={design.id} revision={baseRevision} approval={design.approval} />}
       {!canEdit && !canReview && <p className="border-b border-rule bg-paper-deep/60 px-4 py-1.5 text-xs">You can look at this design but not change it.</p>}
 
