@@ -39,8 +39,9 @@ export function nicheAround(room: RoomSection, wall: Wall, solids: readonly Room
     const [lo, hi] = [b.box.min[0], b.box.max[0]];
     if (lo < nearMm && hi > nearMm) {
       // The opposite wall or the ceiling reaches the band only when the piece is too deep or
-      // too tall for the room; the footprint check says so, the niche is still the whole wall.
-      if (b.kind === 'wall' || b.kind === 'ceiling') continue;
+      // too tall for the room, and a sill only when it is too tall for its window; the checks
+      // say so, and the niche is still bounded by what stands beside it.
+      if (b.kind === 'wall' || b.kind === 'ceiling' || b.kind === 'sill') continue;
       return { takenBy: b.label };
     }
     if (hi <= nearMm && hi > span.fromMm) span = { ...span, fromMm: hi, leftId: b.id };

@@ -4,7 +4,7 @@
  * along the wall (move it or make it narrower), out from the wall (shallower) or up (lower).
  */
 import type { Box3 } from '../../engine/types.ts';
-import { boxIntersection, boxSize } from '../../engine/geometry/box.ts';
+import { boxIntersection, boxSize, boxUnion } from '../../engine/geometry/box.ts';
 import type { Collision, CheckOutcome } from '../collision.ts';
 import type { FitContext } from '../fitContext.ts';
 import { pieceBoxToRoom } from '../roomFrame.ts';
@@ -25,21 +25,21 @@ export function footprintCheck(ctx: FitContext): CheckOutcome {
   let worstMm = 0;
   for (const solid of ctx.solids) {
     const partIds = new Set<string>();
-    let depth = 0;
-    let axis = 0;
-    let overlap: Box3 | null = null;
+    const shared: Box3[] = [];
     for (const part of piece.parts) {
-      const shared = boxIntersection(part.box, solid.local);
-      if (!shared) continue;
+      const overlap = boxIntersection(part.box, solid.local);
+      if (!overlap) continue;
       partIds.add(part.partId);
-      const s = boxSize(shared);
-      const cheapest = s.indexOf(Math.min(...s));
-      if (s[cheapest]! > depth) [depth, axis, overlap] = [s[cheapest]!, cheapest, shared];
+      shared.push(overlap);
     }
-    if (partIds.size === 0 || overlap === null) continue;
+    if (shared.length === 0) continue;
+    // The whole piece must come clear, so the move is read off everything it shares with the solid.
+    const overlap = boxUnion(shared);
+    const s = boxSize(overlap);
+    const axis = s.indexOf(Math.min(...s)) as 0 | 1 | 2;
     collisions.push({ checkId: 'footprint', solidId: solid.id, partIds: [...partIds], overlapMm: pieceBoxToRoom(room, placed.pose, overlap) });
-    fixes.push(`${solid.label}: ${AXIS_FIX[axis as 0 | 1 | 2](mmText(depth))}`);
-    worstMm = Math.max(worstMm, depth);
+    fixes.push(`${solid.label}: ${AXIS_FIX[axis](mmText(s[axis]))}`);
+    worstMm = Math.max(worstMm, s[axis]);
   }
 
   const sizeText = size.map(mmText).join(' × ');
