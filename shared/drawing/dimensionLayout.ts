@@ -6,7 +6,7 @@
  * outermost; a text that does not fit between its extension lines goes beside the line, right
  * or above first, else left or below.
  */
-import { inflate, rectUnion } from './rects.ts';
+import { inflate, rectsOverlap, rectUnion } from './rects.ts';
 import { capHeightMm, DIM_TEXT_PT, textWidthMm, VIEW_TITLE_PT } from './textMetrics.ts';
 import type { DimensionRequest, Label, ModelView, PlacedView, Primitive, Pt, Rect } from './types.ts';
 
@@ -128,6 +128,14 @@ export function layoutView(model: ModelView, scale: number, scaleLabel: string):
   const rows: Record<Side, Row[]> = { below: [], above: [], left: [], right: [] };
   const tierStart: Record<Side, number> = { below: 0, above: 0, left: 0, right: 0 };
   const texts: { text: string; key?: string }[] = [];
+  // Every text placed so far, so a text beside one row never lands on a text of another side.
+  const textRects: Rect[] = [];
+  const textFree = (c: PlacedDim): boolean => {
+    const label = c.primitives.find((p) => p.type === 'label');
+    if (!label) return true;
+    const r = inflate(primitiveRect(label), 0.7);
+    return textRects.every((t) => !rectsOverlap(r, t));
+  };
   const byTier = [...model.dimensions].filter((d) => Math.abs(d.valueMm) >= MIN_DIM_MM).sort((x, y) => x.tier - y.tier || x.valueMm - y.valueMm);
 
   let currentTier = byTier[0]?.tier ?? 0;
@@ -150,8 +158,10 @@ export function layoutView(model: ModelView, scale: number, scaleLabel: string):
       const rowAt = rowPosition(geometry, side, r);
       for (const place of places) {
         const candidate = drawDimension(req, p0, p1, side, rowAt, place);
-        if (fits(rows[side][r], candidate.lo, candidate.hi)) {
+        if (fits(rows[side][r], candidate.lo, candidate.hi) && textFree(candidate)) {
           placed = candidate;
+          const label = candidate.primitives.find((p) => p.type === 'label');
+          if (label) textRects.push(primitiveRect(label));
           rows[side][r] ??= { intervals: [] };
           rows[side][r]!.intervals.push([candidate.lo, candidate.hi]);
           break;

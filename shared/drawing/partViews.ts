@@ -5,6 +5,7 @@
  * next, and the part's finished length, width and thickness outermost.
  */
 import type { Box3, Feature, Part } from '../engine/types.ts';
+import { applyBreak, chooseBreak } from './breakView.ts';
 import { dimension } from './chain.ts';
 import { lengthText, type DrawingUnits } from './lengthText.ts';
 import { chooseFaceUp, onAxis, partSize, partViewAxes, type FaceUp, type PartViewAxes, type PartViewId } from './partFrame.ts';
@@ -216,14 +217,18 @@ export function partViews(part: Part, units: DrawingUnits, up: FaceUp = chooseFa
   dims.add(2, 0, 0, size[2], whole, 2, { key: 'thickness', overall: true });
   dims.add(2, 1, 0, size[2], whole, 2, { overall: true });
 
+  const stationsX = [...grid.breaks[0], ...part.features.flatMap((f) => (f.type === 'hole' || f.type === 'slot' ? f.removed.flatMap((b) => [b.min[0], b.max[0]]) : []))];
+  const cut = chooseBreak(size[0], Math.max(size[1], size[2]), stationsX);
   const out = {} as Record<PartViewId, ModelView>;
   for (const id of ['face', 'edge', 'end'] as const) {
     const va = axes[id];
     const primitives: Primitive[] = [...partEdges(part, va, grid), ...part.features.flatMap((f) => holePrimitives(f, va, size, units))];
-    out[id] = {
+    const view: ModelView = {
       id, title: TITLES[id], primitives, dimensions: dims.byView[id], callouts: [],
       bounds: { x: 0, y: 0, w: size[va.u.axis], h: size[va.v.axis] },
     };
+    // Face and edge views run along the length (u is local x), so a break shortens both alike.
+    out[id] = cut && va.u.axis === 0 ? applyBreak(view, cut) : view;
   }
   return out;
 }

@@ -179,7 +179,10 @@ export function buildPlanSet(result: PieceResult, opts: PlanSetOptions): PlanSet
     flowSheet('Wood movement', movementBlocks(result, units)),
     flowSheet('Safety notes', safetyBlocks(result)),
   ];
-  const cover = coverSheet(result, spec, units, body.map((s) => s.name));
+  const partNames = body.filter((s) => s.name.startsWith('Part ')).map((s) => s.name);
+  const contents = body.filter((s) => !s.name.startsWith('Part ')).map((s) => s.name);
+  if (partNames.length) contents.splice(2, 0, `Part drawings ${letters.get(result.parts[0]!.id)}–${letters.get(result.parts[result.parts.length - 1]!.id)} (${partNames.length})`);
+  const cover = coverSheet(result, spec, units, contents);
   const sheets: Sheet[] = [cover, ...body].map((s, i) => ({ ...s, number: i + 1 }));
   return { info, sheet: spec, sheets };
 }

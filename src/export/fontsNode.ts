@@ -13,11 +13,20 @@ let cached: Promise<MonoFonts> | null = null;
 
 async function ttf(weight: 400 | 700): Promise<Uint8Array> {
   const path = require.resolve(`@fontsource/jetbrains-mono/files/jetbrains-mono-latin-${weight}-normal.woff2`);
-  return new Uint8Array(await decompress(await readFile(path)));
+  const woff2 = await readFile(path);
+  // Copy at once, before anything else can run the decompressor.
+  return (await decompress(woff2)).slice();
+}
+
+async function load(): Promise<MonoFonts> {
+  // One at a time: the decompressor returns a view into its own memory, which the next call reuses.
+  const regular = await ttf(400);
+  const bold = await ttf(700);
+  return { regular, bold };
 }
 
 /** Regular and bold JetBrains Mono as TrueType, loaded once per process. */
 export function monoFontsNode(): Promise<MonoFonts> {
-  cached ??= Promise.all([ttf(400), ttf(700)]).then(([regular, bold]) => ({ regular, bold }));
+  cached ??= load();
   return cached;
 }
