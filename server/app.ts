@@ -30,6 +30,8 @@ export function createApp(deps: AppDeps): Express {
   const { config, sequelize } = deps;
   const app = express();
   app.disable('x-powered-by');
+  // JSON answers escape <, > and & so stored text can never be read as markup.
+  app.set('json escape', true);
   if (config.trustProxy > 0) app.set('trust proxy', config.trustProxy);
 
   app.use(

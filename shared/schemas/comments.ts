@@ -1,17 +1,16 @@
 /** Comments on a design, optionally pinned to a revision and a part, and reviewers' decisions. */
 import { z } from 'zod';
-import { idSchema, personSchema, revisionNumberSchema, timestampSchema } from './common.ts';
+import { idSchema, personSchema, revisionNumberSchema, textSchema, timestampSchema } from './common.ts';
 import { approvalDecisionSchema } from './designs.ts';
 
 /** Part ids are the engine's readable ids, e.g. `front-top-rail`. */
-export const partIdSchema = z
-  .string()
+export const partIdSchema = textSchema
   .trim()
   .min(1, { message: 'must not be empty' })
   .max(100, { message: 'must be at most 100 characters' });
 
 export const commentCreateBody = z.strictObject({
-  body: z.string().trim().min(1, { message: 'must not be empty' }).max(5000, { message: 'must be at most 5000 characters' }),
+  body: textSchema.trim().min(1, { message: 'must not be empty' }).max(5000, { message: 'must be at most 5000 characters' }),
   revision: revisionNumberSchema.optional(),
   partId: partIdSchema.optional(),
 });
@@ -35,7 +34,7 @@ export const commentListQuery = z.strictObject({
 export const approvalCreateBody = z.strictObject({
   revision: revisionNumberSchema,
   decision: approvalDecisionSchema,
-  note: z.string().trim().max(2000, { message: 'must be at most 2000 characters' }).default(''),
+  note: textSchema.trim().max(2000, { message: 'must be at most 2000 characters' }).default(''),
 });
 
 export const approvalSchema = z.object({

@@ -2,6 +2,12 @@
 import { z } from 'zod';
 import { ROLES } from '../permissions.ts';
 
+/**
+ * Text people type. PostgreSQL cannot store the NUL character, so it is refused here with a
+ * 400 instead of failing in the database.
+ */
+export const textSchema = z.string().refine((text) => !text.includes('\u0000'), { message: 'must not contain NUL characters' });
+
 /** Database ids are UUIDs. */
 export const idSchema = z.uuid({ message: 'must be an id (UUID)' });
 
@@ -18,8 +24,7 @@ export const passwordSchema = z
   .max(200, { message: 'must be at most 200 characters' });
 
 /** A person's or a workshop's display name. */
-export const nameSchema = z
-  .string()
+export const nameSchema = textSchema
   .trim()
   .min(1, { message: 'must not be empty' })
   .max(120, { message: 'must be at most 120 characters' });

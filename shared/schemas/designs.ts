@@ -3,27 +3,37 @@
  * engine's business (`validateSpec` names the parameter and its limit).
  */
 import { z } from 'zod';
-import { idSchema, personSchema, revisionNumberSchema, timestampSchema } from './common.ts';
+import { idSchema, personSchema, revisionNumberSchema, textSchema, timestampSchema } from './common.ts';
 
 export const PIECE_KINDS = ['chest', 'dresser', 'cabinet'] as const;
 export const pieceKindSchema = z.enum(PIECE_KINDS);
 
-export const pieceSpecSchema = z.strictObject({
-  schemaVersion: z.literal(1, { message: 'must be 1' }),
-  kind: pieceKindSchema,
-  params: z.record(z.string().max(100), z.unknown()),
-  climate: z.unknown().optional(),
-  room: z.unknown().optional(),
-});
+/** True when a NUL character appears in any string or key inside `value`. */
+function hasNul(value: unknown): boolean {
+  if (typeof value === 'string') return value.includes('\u0000');
+  if (Array.isArray(value)) return value.some(hasNul);
+  if (value && typeof value === 'object') return Object.entries(value).some(([k, v]) => k.includes('\u0000') || hasNul(v));
+  return false;
+}
 
-export const titleSchema = z
-  .string()
+export const pieceSpecSchema = z
+  .strictObject({
+    schemaVersion: z.literal(1, { message: 'must be 1' }),
+    kind: pieceKindSchema,
+    params: z.record(z.string().max(100), z.unknown()),
+    climate: z.unknown().optional(),
+    room: z.unknown().optional(),
+  })
+  // Stored as JSONB, which cannot hold a NUL character anywhere.
+  .refine((spec) => !hasNul(spec), { message: 'must not contain NUL characters' });
+
+export const titleSchema = textSchema
   .trim()
   .min(1, { message: 'must not be empty' })
   .max(200, { message: 'must be at most 200 characters' });
 
 /** What a revision says about itself, like a commit message. */
-export const messageSchema = z.string().trim().max(1000, { message: 'must be at most 1000 characters' });
+export const messageSchema = textSchema.trim().max(1000, { message: 'must be at most 1000 characters' });
 
 export const designCreateBody = z.strictObject({
   title: titleSchema,
@@ -58,7 +68,7 @@ const booleanText = z.enum(['true', 'false', 'all'], { message: 'must be true, f
 export const designListQuery = z.strictObject({
   kind: pieceKindSchema.optional(),
   /** Words to find in the title. */
-  q: z.string().trim().max(200, { message: 'must be at most 200 characters' }).optional(),
+  q: textSchema.trim().max(200, { message: 'must be at most 200 characters' }).optional(),
   /** Designs whose head revision this user saved. */
   authorId: idSchema.optional(),
   updatedAfter: z.coerce.date({ message: 'must be a date' }).optional(),
