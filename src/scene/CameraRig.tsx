@@ -21,6 +21,10 @@ export function CameraRig(props: { view: PresetView; bounds: Box3; framingKey: s
   const controls = useThree((s) => s.controls) as OrbitControlsImpl | null;
   const invalidate = useThree((s) => s.invalidate);
   const canvas = useThree((s) => s.gl.domElement);
+  const size = useThree((s) => s.size);
+  const aspect = size.height > 0 ? size.width / size.height : 1;
+  const aspectRef = useRef(aspect);
+  aspectRef.current = aspect;
   const goal = useRef<{ position: Vector3; target: Vector3 } | null>(null);
   const placed = useRef(false);
   // Only a new view or a new piece reframes; typing a new width must not yank the camera.
@@ -29,7 +33,7 @@ export function CameraRig(props: { view: PresetView; bounds: Box3; framingKey: s
 
   useEffect(() => {
     if (!controls) return;
-    const preset = presetCamera(view, boundsRef.current);
+    const preset = presetCamera(view, boundsRef.current, aspectRef.current);
     const position = new Vector3(...preset.position);
     const target = new Vector3(...preset.target);
     if (!placed.current) {

@@ -13,6 +13,15 @@ describe('sectionHatches', () => {
     }
   });
 
+  it('gives parts that only touch different hatches too', () => {
+    const result: PieceResult = { ...frameSideResult(), joints: [] };
+    const hatch = sectionHatches(result);
+    // The rails' tongues sit in the legs' grooves and the panel in the rails': all touch.
+    expect(hatch.get('leg')).not.toBe(hatch.get('bottom-rail'));
+    expect(hatch.get('bottom-rail')).not.toBe(hatch.get('panel'));
+    expect(hatch.get('top-rail')).not.toBe(hatch.get('panel'));
+  });
+
   it('hatches every part, with one of the known hatches', () => {
     const result = frameSideResult();
     const hatch = sectionHatches(result);
