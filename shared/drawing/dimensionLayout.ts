@@ -129,7 +129,7 @@ export function layoutView(model: ModelView, scale: number, scaleLabel: string):
   const tierStart: Record<Side, number> = { below: 0, above: 0, left: 0, right: 0 };
   const texts: { text: string; key?: string }[] = [];
   // Every text placed so far, so a text beside one row never lands on a text of another side.
-  const textRects: Rect[] = [];
+  const textRects: Rect[] = primitives.filter((p) => p.type === 'label').map(primitiveRect);
   const textFree = (c: PlacedDim): boolean => {
     const label = c.primitives.find((p) => p.type === 'label');
     if (!label) return true;

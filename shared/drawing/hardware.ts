@@ -22,6 +22,19 @@ function densityOf(part: Part): number | null {
   return isSheetGoodId(part.material.sheetId) ? getSheetGood(part.material.sheetId).densityKgM3 : null;
 }
 
+/**
+ * Largest torque (N·m) a uniform lid of `massKg` and `depthMm` puts on its hinge line, lid
+ * closed: weight × depth / 2 (secondary: hinge manufacturers' sizing guides).
+ */
+export function lidTorqueNm(massKg: number, depthMm: number): number {
+  return (massKg * G * (depthMm / 1000)) / 2;
+}
+
+/** Converts N·m to lbf·in (1 lbf·in = 0.1130 N·m). */
+export function lbfInFromNm(nm: number): number {
+  return nm / NM_PER_LBF_IN;
+}
+
 /** The lid's weight and the torque it puts on its supports. */
 export interface LidTorque {
   /** Lid and battens together, kg. */
@@ -46,10 +59,10 @@ export function lidTorque(result: PieceResult): LidTorque | null {
     massKg += (i.part.lengthMm * i.part.widthMm * i.part.thicknessMm * 1e-9) * d;
   }
   const depthMm = Math.max(...lids.map((i) => i.box.max[1] - i.box.min[1]));
-  const torqueNm = massKg * G * (depthMm / 1000) / 2;
+  const torqueNm = lidTorqueNm(massKg, depthMm);
   const hingeParam = result.spec.params.hingeCount;
   const hinges = typeof hingeParam === 'number' && hingeParam > 0 ? hingeParam : 2;
-  return { massKg, depthMm, torqueNm, torqueLbfIn: torqueNm / NM_PER_LBF_IN, hinges };
+  return { massKg, depthMm, torqueNm, torqueLbfIn: lbfInFromNm(torqueNm), hinges };
 }
 
 /** The hardware page: hinges and lid supports with the torque they must hold. */

@@ -22,7 +22,7 @@ export function movementBlocks(result: PieceResult, units: DrawingUnits): FlowBl
     approximate ||= swing.approximate || !swing.withinPublishedRange;
     rows.push([
       p.name, String(p.quantity), lengthText(across, units),
-      `−${lengthText(swing.shrinkMm, units === 'in' ? 'in' : 'mm')}`,
+      `−${lengthText(swing.shrinkMm, units)}`,
       `+${lengthText(swing.swellMm, units)}`,
       lengthText(swing.totalMm, units),
     ]);

@@ -204,6 +204,20 @@ function obround(cx: number, cy: number, hu: number, hv: number, r: number): Pt[
   return pts;
 }
 
+/** Identical hole and slot labels are written once, on the first, with the count: `3× …`. */
+function oneLabelEach(primitives: readonly Primitive[]): Primitive[] {
+  const counts = new Map<string, number>();
+  for (const p of primitives) if (p.type === 'label') counts.set(p.text, (counts.get(p.text) ?? 0) + 1);
+  const done = new Set<string>();
+  return primitives.flatMap((p): Primitive[] => {
+    if (p.type !== 'label') return [p];
+    if (done.has(p.text)) return [];
+    done.add(p.text);
+    const n = counts.get(p.text) ?? 1;
+    return [n > 1 ? { ...p, text: `${n}× ${p.text}` } : p];
+  });
+}
+
 /** The three views of `part`, each with its dimensions, in model space (mm, y up). */
 export function partViews(part: Part, units: DrawingUnits, up: FaceUp = chooseFaceUp(part)): Record<PartViewId, ModelView> {
   const size = partSize(part);
@@ -222,7 +236,7 @@ export function partViews(part: Part, units: DrawingUnits, up: FaceUp = chooseFa
   const out = {} as Record<PartViewId, ModelView>;
   for (const id of ['face', 'edge', 'end'] as const) {
     const va = axes[id];
-    const primitives: Primitive[] = [...partEdges(part, va, grid), ...part.features.flatMap((f) => holePrimitives(f, va, size, units))];
+    const primitives: Primitive[] = [...partEdges(part, va, grid), ...oneLabelEach(part.features.flatMap((f) => holePrimitives(f, va, size, units)))];
     const view: ModelView = {
       id, title: TITLES[id], primitives, dimensions: dims.byView[id], callouts: [],
       bounds: { x: 0, y: 0, w: size[va.u.axis], h: size[va.v.axis] },

@@ -34,8 +34,11 @@ export interface PlanSetOptions {
 
 /** Height of a part sheet's heading, mm. */
 const HEADING_MM = 13;
-/** Share of the drawing area's height part views may take; the feature table gets the rest. */
-const PART_VIEWS_SHARE = 0.66;
+/** Share of the drawing area's height part views may always take, however long the feature table. */
+const PART_VIEWS_MIN_SHARE = 0.55;
+/** Height a feature-table row and the table's title and footnote take, mm (7.5 pt rows). */
+const TABLE_ROW_MM = 4.6;
+const TABLE_EXTRA_MM = 22;
 
 type SheetDraft = Omit<Sheet, 'number'>;
 
@@ -129,7 +132,10 @@ function fitPartViews(part: Part, area: Rect, units: DrawingUnits): PlacedView[]
 
 function partSheet(part: Part, letter: string, spec: SheetSpec, units: DrawingUnits): SheetDraft {
   const area = drawingArea(spec);
-  const viewsArea: Rect = { x: area.x, y: area.y + HEADING_MM, w: area.w, h: (area.h - HEADING_MM) * PART_VIEWS_SHARE };
+  // The views get what the cut table and notes leave, so the page holds both without a continuation.
+  const flowNeed = (part.features.length ? TABLE_EXTRA_MM + part.features.length * TABLE_ROW_MM : 0) + (part.notes.length ? 10 + part.notes.length * 5 : 0);
+  const viewsH = Math.max((area.h - HEADING_MM) * PART_VIEWS_MIN_SHARE, area.h - HEADING_MM - flowNeed);
+  const viewsArea: Rect = { x: area.x, y: area.y + HEADING_MM, w: area.w, h: viewsH };
   const views = fitPartViews(part, viewsArea, units);
   const used = rectUnion(views.map((v) => v.frame));
   const flowTop = used.y + used.h + 4;

@@ -131,6 +131,11 @@ function drawTable(doc: jsPDF, block: TableBlock, y: number, area: Rect, page: R
     doc.setFont(SANS, 'normal');
     doc.setFontSize(6.5);
     const lines = doc.splitTextToSize(winAnsi(block.footnote), area.w) as string[];
+    if (after + 2.5 + lines.length * 2.8 > area.y + area.h) {
+      onNewPage();
+      doc.addPage();
+      after = drawingArea({ size: 'a4', orientation: 'portrait' }).y;
+    }
     doc.text(lines, area.x, after + 2.5);
     after += 2.5 + lines.length * 2.8;
   }
