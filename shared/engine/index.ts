@@ -5,7 +5,9 @@
 import { InputError } from '../errors.ts';
 import { deriveOutputs } from './derived/index.ts';
 import { validateSpec } from './params.ts';
+import { buildCabinet } from './pieces/cabinet.ts';
 import { buildChest } from './pieces/chest.ts';
+import { buildDresser } from './pieces/dresser.ts';
 import type { PieceResult, PieceSpec } from './types.ts';
 
 export * from './types.ts';
@@ -32,8 +34,14 @@ export function buildPiece(spec: PieceSpec): PieceResult {
     case 'chest':
       built = buildChest(checked);
       break;
+    case 'dresser':
+      built = buildDresser(checked);
+      break;
+    case 'cabinet':
+      built = buildCabinet(checked);
+      break;
     default:
-      throw new InputError('kind', `the ${checked.kind} is not built by this version of the engine yet; available: chest`, 'chest');
+      throw new InputError('kind', `the ${String(checked.kind)} is not built by this version of the engine yet; available: chest, dresser, cabinet`, 'chest, dresser, cabinet');
   }
   const result: PieceResult = Object.freeze({
     spec: checked,

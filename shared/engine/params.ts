@@ -11,6 +11,10 @@ import { isSpeciesId, SPECIES_IDS } from '../wood/species.ts';
 import type { ParamDef } from './paramDef.ts';
 import { CHEST_PARAMS } from './pieces/chestParams.ts';
 import { validateChestCombinations } from './pieces/chestValidate.ts';
+import { CABINET_PARAMS } from './pieces/cabinetParams.ts';
+import { validateCabinetCombinations } from './pieces/cabinet.ts';
+import { DRESSER_PARAMS } from './pieces/dresserParams.ts';
+import { validateDresserCombinations } from './pieces/dresser.ts';
 import type { ParamValue, PieceKind, PieceSpec } from './types.ts';
 
 export type { ParamDef, ParamKind } from './paramDef.ts';
@@ -24,9 +28,10 @@ interface KindParams {
   combinations: (params: Readonly<Record<string, ParamValue>>, climate: Climate) => void;
 }
 
-// Dressers and cabinets join this table when they are built.
 const KINDS: Partial<Record<PieceKind, KindParams>> = {
   chest: { defs: CHEST_PARAMS, combinations: validateChestCombinations },
+  dresser: { defs: DRESSER_PARAMS, combinations: validateDresserCombinations },
+  cabinet: { defs: CABINET_PARAMS, combinations: validateCabinetCombinations },
 };
 
 function kindParams(kind: unknown): KindParams {

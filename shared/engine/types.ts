@@ -63,7 +63,27 @@ export type PartRole =
   | 'bottom'
   | 'cleat'
   | 'lid'
-  | 'batten';
+  | 'batten'
+  // Case pieces (dressers, cabinets): a carcass of sheet goods and what hangs on it.
+  | 'case-side'
+  | 'case-top'
+  | 'case-bottom'
+  | 'stretcher'
+  | 'back'
+  | 'divider'
+  | 'shelf'
+  | 'edge-strip'
+  | 'face-frame'
+  | 'runner'
+  | 'top'
+  | 'base'
+  | 'door'
+  | 'door-frame'
+  | 'door-panel'
+  | 'drawer-front'
+  | 'drawer-side'
+  | 'drawer-end'
+  | 'drawer-bottom';
 
 /** Grain direction of a part, in its local frame; sheet goods have none that limits movement. */
 export type Grain = 'length' | 'width' | 'none';
@@ -246,7 +266,21 @@ export type JointType =
   | 'bottom-on-cleats'
   | 'batten-screwed'
   | 'hinge'
-  | 'edge-glued';
+  | 'edge-glued'
+  // Case pieces.
+  | 'dado'
+  | 'rabbet'
+  | 'back-in-rabbet'
+  | 'back-in-groove'
+  | 'butt-screwed'
+  | 'pocket-screw'
+  | 'face-frame-glued'
+  | 'tongue-and-dado'
+  | 'bottom-in-groove'
+  | 'shelf-pin'
+  | 'top-fastened'
+  | 'drawer-slide'
+  | 'front-screwed';
 
 /** One side of a joint: a part and the features of it that take part. */
 export interface JointMember {

@@ -1,0 +1,41 @@
+/** Drawer boxes against their openings and the slides they run on. */
+import type { SlideRule, SlideType } from '../constructions/slides.ts';
+import type { Check } from '../types.ts';
+import { both, check } from './check.ts';
+
+/** One drawer's box and opening (mm). */
+export interface DrawerFitFacts {
+  id: string;
+  where: string;
+  partIds: readonly string[];
+  openingHeightMm: number;
+  boxHeightMm: number;
+  /** Depth from the box's front to the carcass back, less the rear clearance. */
+  availableDepthMm: number;
+  boxDepthMm: number;
+  slide: SlideType;
+  rule: SlideRule;
+}
+
+/** A box too tall for its opening and slide, or too deep for the case. */
+export function drawerFitChecks(f: DrawerFitFacts): Check[] {
+  const out: Check[] = [];
+  const vertical = f.openingHeightMm - f.boxHeightMm;
+  if (vertical < f.rule.minVerticalClearanceMm - 1e-9) {
+    out.push(check({
+      id: `drawer-too-tall:${f.id}`, severity: 'error', title: `Drawer box too tall (${f.where})`, partIds: f.partIds,
+      numbers: { openingHeightMm: f.openingHeightMm, boxHeightMm: f.boxHeightMm, clearanceMm: vertical, neededClearanceMm: f.rule.minVerticalClearanceMm },
+      message: `A ${both(f.boxHeightMm)} box in a ${both(f.openingHeightMm)} opening leaves ${both(vertical)}; ${f.slide} slides need at least ${both(f.rule.minVerticalClearanceMm)} to fit and lift out.`,
+      fix: `Make the box no taller than ${both(f.openingHeightMm - f.rule.minVerticalClearanceMm)} (more clearance above or below it).`,
+    }));
+  }
+  if (f.boxDepthMm > f.availableDepthMm + 1e-9) {
+    out.push(check({
+      id: `drawer-too-deep:${f.id}`, severity: 'error', title: `Drawer box too deep (${f.where})`, partIds: f.partIds,
+      numbers: { boxDepthMm: f.boxDepthMm, availableDepthMm: f.availableDepthMm, overMm: f.boxDepthMm - f.availableDepthMm },
+      message: `A ${both(f.boxDepthMm)} box needs more than the ${both(f.availableDepthMm)} inside the case: it hits the back before the front closes.`,
+      fix: f.rule.lengthsMm ? `Use a shorter slide (the longest that fits is chosen when the drawer depth is left at 0).` : `Make the box no deeper than ${both(f.availableDepthMm)}.`,
+    }));
+  }
+  return out;
+}
