@@ -4,6 +4,8 @@
  * to the largest scale that passes, found by halving; pinned sizes stay as they are. Asked not
  * to keep proportions, each free size then grows on its own as far as it can.
  *
+ * A check that fails only for want of input (a room with no door entered) does not stop a size.
+ *
  * Halving assumes a piece that passes also passes a little smaller, which holds for every room
  * check (a smaller box, a shorter lid, a shorter drawer reach less far). The answer is checked
  * again at whole millimetres before it is returned, so it always passes.
@@ -64,7 +66,7 @@ export function fitToNiche(spec: PieceSpec, room: RoomSection, build: PieceBuild
   const tryFit = (sizes: Record<SizeKey, number>): RoomFit | null => {
     try {
       const fit = fitRoom(room, envelopeFromResult(build(withSizes(spec, sizes))));
-      return fit.passed ? fit : null;
+      return sizePasses(fit) ? fit : null;
     } catch (error) {
       if (isInputError(error)) return null; // outside the engine's limits: not a size it can build
       throw error;
@@ -115,6 +117,11 @@ export function fitToNiche(spec: PieceSpec, room: RoomSection, build: PieceBuild
   };
 }
 
+/** Every check passed, or failed only for want of input that no size can supply. */
+function sizePasses(fit: RoomFit): boolean {
+  return fit.checks.every((c) => c.passed || c.needsInput === true);
+}
+
 function sizesOf(result: PieceResult): Record<SizeKey, number> {
   const out = {} as Record<SizeKey, number>;
   for (const key of SIZE_KEYS) {
@@ -148,9 +155,9 @@ function grow(sizes: Record<SizeKey, number>, key: SizeKey, max: number, passes:
   return { ...sizes, [key]: lo };
 }
 
-/** The sizes rounded down to whole mm, stepping down a millimetre at a time (a few times) until they pass. */
+/** The sizes at whole mm: the millimetre above first (halving stops short of the edge), then down a millimetre at a time until they pass. */
 function wholeMm(sizes: Record<SizeKey, number>, free: readonly SizeKey[], passes: (s: Record<SizeKey, number>) => RoomFit | null): Record<SizeKey, number> | null {
-  for (let step = 0; step < 5; step++) {
+  for (let step = -1; step < 5; step++) {
     const candidate = { ...sizes, ...Object.fromEntries(free.map((k) => [k, Math.floor(sizes[k]) - step])) };
     if (passes(candidate)) return candidate;
   }

@@ -30,7 +30,8 @@ export interface WallBand {
  */
 export function nicheAround(room: RoomSection, wall: Wall, solids: readonly RoomSolid[], band: WallBand, nearMm: number): NicheSpan | { takenBy: string } {
   const blockers = solids
-    .filter((s) => s.id !== `wall:${wall}`)
+    // The piece is pulled out past its own wall's baseboard (or scribed over it), so neither bounds the niche.
+    .filter((s) => s.id !== `wall:${wall}` && !s.id.startsWith(`baseboard:${wall}:`))
     .map((s) => ({ id: s.id, label: s.label, kind: s.kind, box: roomBoxToWall(room, wall, s.box) }))
     .filter(({ box }) => inBand(box, band));
 

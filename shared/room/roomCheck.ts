@@ -4,6 +4,8 @@ import type { Check, Severity } from '../engine/types.ts';
 /** One room-fit check. A passing check has severity `info`; numbers are mm unless named otherwise. */
 export interface RoomCheck extends Check {
   passed: boolean;
+  /** True when it failed for want of input (no door entered), not because of the piece's size. */
+  needsInput?: boolean;
 }
 
 /** Builds a check; `severity` applies only when it fails. */

@@ -19,7 +19,7 @@ export function passageChecks(ctx: FitContext): CheckOutcome[] {
       check: roomCheck({
         id: 'passage', passed: false, failSeverity: 'warning', title: 'Through the door',
         message: 'The room has no door entered, so getting the piece in is not checked.',
-        partIds: [], numbers: {}, fix: 'Enter the door the piece comes in through.',
+        partIds: [], numbers: {}, fix: 'Enter the door the piece comes in through.', needsInput: true,
       }),
       collisions: [],
     }];
