@@ -35,7 +35,7 @@ export interface PlanSetOptions {
 /** Height of a part sheet's heading, mm. */
 const HEADING_MM = 13;
 /** Share of the drawing area's height part views may always take, however long the feature table. */
-const PART_VIEWS_MIN_SHARE = 0.55;
+const PART_VIEWS_MIN_SHARE = 0.66;
 /** Height a feature-table row and the table's title and footnote take, mm (7.5 pt rows). */
 const TABLE_ROW_MM = 4.6;
 const TABLE_EXTRA_MM = 22;
@@ -125,9 +125,13 @@ function fitPartViews(part: Part, area: Rect, units: DrawingUnits): PlacedView[]
       if (frame.w <= area.w && frame.h <= area.h) return centreIn(views, frame, area, true);
     }
   }
-  const s = scales[scales.length - 1]!;
-  const { views, frame } = arrangeAt([{ view: face, place: 'anchor' }, { view: edge, place: 'below' }, { view: end, place: 'right' }], s);
-  return centreIn(views, frame, area, true);
+  // Nothing fits the height: take the largest scale that fits the width; the cut table then
+  // starts below the views and continues on the next page if it must.
+  for (const s of scales) {
+    const { views, frame } = arrangeAt([{ view: face, place: 'anchor' }, { view: edge, place: 'below' }, { view: end, place: 'right' }], s);
+    if (frame.w <= area.w || s === scales[scales.length - 1]) return centreIn(views, frame, area, true);
+  }
+  throw new Error('Assertion failed: usualScales is never empty');
 }
 
 function partSheet(part: Part, letter: string, spec: SheetSpec, units: DrawingUnits): SheetDraft {
