@@ -1,7 +1,8 @@
 /**
  * Sessions kept in PostgreSQL (connect-pg-simple, in the `session` table the first migration
  * made), so any number of API processes can serve the same users and a restart signs nobody out.
- * Cookies are httpOnly and SameSite=Lax, and Secure in production.
+ * Cookies are httpOnly and SameSite=Lax, and Secure in production; a session lasts two weeks
+ * from sign-in.
  */
 import type { RequestHandler } from 'express';
 import session from 'express-session';
@@ -43,7 +44,8 @@ export function sessionMiddleware(config: Config, pool: pg.Pool): RequestHandler
     secret: config.sessionSecret,
     resave: false,
     saveUninitialized: false,
-    rolling: true,
+    // Not rolling: renewing the expiry would write the session row on every request.
+    rolling: false,
     cookie: { httpOnly: true, sameSite: 'lax', secure: config.isProduction, maxAge: TWO_WEEKS_MS, path: '/' },
   });
   // A store failure is a database outage: answer 503 like every other database error.
