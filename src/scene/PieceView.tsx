@@ -20,6 +20,12 @@
  *    looks along that axis (`y`: the front, `x`: the right side, `z`: the top) and paints the cut
  *    faces a darker tone, so tongues show in their grooves.
  *  - `view`: the preset camera; changing it glides the camera there. Orbiting leaves it alone.
+ *  - `room` (optional): shared/room's scene for the fitted piece (`fitRoom(...).scene`). The view
+ *    then draws the room lightly around the piece — floor, walls, door and window openings,
+ *    baseboards, sills, door landings and obstacles — with the piece at its room placement, its
+ *    lid and doors swung and drawers pulled to the positions the checks tested, and every part
+ *    and room solid a check found meeting in pencil red. Presets frame the whole room; explode
+ *    and the cut-away are set aside while the room is shown.
  *  - `className`: sizing of the wrapper; the canvas fills it.
  *
  * For tests: the wrapper is `[data-testid="piece-view"]` with `data-part-count` (instances drawn)
@@ -35,6 +41,8 @@ import { CameraRig } from './CameraRig.tsx';
 import { CAMERA_FOV_DEG, type PresetView } from './cameraPresets.ts';
 import { PartMesh } from './PartMesh.tsx';
 import { createPartSolidCache } from './partGeometry.ts';
+import { RoomLayer } from './RoomLayer.tsx';
+import { placeInRoom, type RoomSceneData } from './roomSceneModel.ts';
 import { ENGINE_TO_THREE_ROTATION_X, SCENE_SCALE } from './sceneFrame.ts';
 import { sceneModel } from './sceneModel.ts';
 import { SectionCaps, sectionRenderOrder } from './SectionCaps.tsx';
@@ -44,6 +52,7 @@ import { PAPER_HEX, StageLights } from './StageLights.tsx';
 import { createWoodMaterials, type Highlight } from './woodMaterials.ts';
 
 export type { PresetView } from './cameraPresets.ts';
+export type { RoomSceneData } from './roomSceneModel.ts';
 export type { Cutaway } from './sectionPlane.ts';
 
 export interface PieceViewProps {
@@ -55,6 +64,7 @@ export interface PieceViewProps {
   explode: number;
   cutaway: null | Cutaway;
   view: PresetView;
+  room?: RoomSceneData | null;
   className?: string;
 }
 
@@ -68,7 +78,11 @@ function EnableLocalClipping() {
 }
 
 function PieceScene(props: PieceViewProps) {
-  const { result, selectedPartId, onSelectPart, explode, cutaway, view } = props;
+  const { result, selectedPartId, onSelectPart, view } = props;
+  const room = props.room ?? null;
+  // The room view shows the piece assembled and whole, as it will stand.
+  const explode = room ? 0 : props.explode;
+  const cutaway = room ? null : props.cutaway;
   const invalidate = useThree((s) => s.invalidate);
   const [ownHover, setOwnHover] = useState<string | null>(null);
   const hovered = props.hoveredPartId !== undefined ? props.hoveredPartId : ownHover;
@@ -86,8 +100,11 @@ function PieceScene(props: PieceViewProps) {
     materials.dispose();
   }, [solids, materials]);
 
-  const model = useMemo(() => sceneModel(result, { explode }), [result, explode]);
+  const pieceModel = useMemo(() => sceneModel(result, { explode }), [result, explode]);
   const assembledBounds = useMemo(() => sceneModel(result, { explode: 0 }).bounds, [result]);
+  const inRoom = useMemo(() => (room ? placeInRoom(pieceModel, room) : null), [pieceModel, room]);
+  const meshes = inRoom ? inRoom.meshes : pieceModel.meshes;
+  const frameBounds = room ? room.roomBox : assembledBounds;
   const partsById = useMemo(() => new Map(result.parts.map((p) => [p.id, p])), [result]);
   const hatches = useMemo(() => sectionHatches(result), [result]);
   // Free the solids of parts the new result no longer has (after it is drawn, never before).
@@ -106,15 +123,16 @@ function PieceScene(props: PieceViewProps) {
     [section],
   );
 
-  const highlightOf = (partId: string): Highlight => (partId === selectedPartId ? 'selected' : partId === hovered ? 'hover' : 'none');
+  const highlightOf = (partId: string): Highlight =>
+    partId === selectedPartId || inRoom?.collidingPartIds.has(partId) ? 'selected' : partId === hovered ? 'hover' : 'none';
 
   return (
     <>
       <EnableLocalClipping />
       <color attach="background" args={[PAPER_HEX]} />
-      <StageLights bounds={assembledBounds} />
+      <StageLights bounds={frameBounds} shadowCatcher={!room} />
       <group rotation-x={ENGINE_TO_THREE_ROTATION_X} scale={SCENE_SCALE}>
-        {model.meshes.map((mesh, index) => {
+        {meshes.map((mesh, index) => {
           const part = partsById.get(mesh.partId)!;
           const highlight = highlightOf(mesh.partId);
           return (
@@ -131,10 +149,11 @@ function PieceScene(props: PieceViewProps) {
             />
           );
         })}
+        {room && inRoom && <RoomLayer room={room} collidingSolidIds={inRoom.collidingSolidIds} />}
       </group>
-      {section && <SectionCaps plane={section} bounds={model.bounds} meshes={model.meshes} hatches={hatches} materials={materials} />}
+      {section && <SectionCaps plane={section} bounds={pieceModel.bounds} meshes={pieceModel.meshes} hatches={hatches} materials={materials} />}
       <OrbitControls makeDefault enableDamping={false} zoomToCursor />
-      <CameraRig view={view} bounds={assembledBounds} framingKey={result.kind} />
+      <CameraRig view={view} bounds={frameBounds} framingKey={`${result.kind}|${room ? 'room' : 'piece'}`} />
     </>
   );
 }

@@ -11,9 +11,10 @@ const SHADOW_MAP_PX = 1024;
 /**
  * Light as at a bench under a window: a soft sky fill, a key light from the front-left above
  * that casts the piece's shadow on the floor, and a weak back light to separate the edges.
- * The key light's shadow box follows the piece's bounds.
+ * The key light's shadow box follows the bounds; `shadowCatcher` false leaves out the paper floor
+ * that shows the shadow (the room view has its own floor).
  */
-export function StageLights(props: { bounds: Box3 }) {
+export function StageLights(props: { bounds: Box3; shadowCatcher?: boolean }) {
   const { centre, radius } = boxSphere(props.bounds);
   const key = useMemo(() => {
     const light = new DirectionalLight('#fffaf0', 2.1);
@@ -47,10 +48,12 @@ export function StageLights(props: { bounds: Box3 }) {
       <primitive object={key} />
       <primitive object={key.target} />
       <directionalLight position={[cx + radius * 2, cy + radius, cz - radius * 3]} intensity={0.45} color="#f1ece2" />
-      <mesh rotation-x={-Math.PI / 2} position={[cx, 0, cz]} receiveShadow raycast={() => {}}>
-        <planeGeometry args={[floorSize, floorSize]} />
-        <shadowMaterial opacity={0.2} color="#3a2f25" />
-      </mesh>
+      {props.shadowCatcher !== false && (
+        <mesh rotation-x={-Math.PI / 2} position={[cx, 0, cz]} receiveShadow raycast={() => {}}>
+          <planeGeometry args={[floorSize, floorSize]} />
+          <shadowMaterial opacity={0.2} color="#3a2f25" />
+        </mesh>
+      )}
     </>
   );
 }
