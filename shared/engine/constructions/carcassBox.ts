@@ -89,8 +89,9 @@ export function carcassBox(o: CarcassBoxOptions): CarcassBox {
     const faceDir = outerToInner > 0 ? '+X' : '-X';
     const type = o.joinery;
     const cuts: FeatureDraft[] = [
-      { id: `${type}-bottom`, type, label: `${type} for the bottom`, faceDir: type === 'rabbet' ? '-Z' : faceDir, removed: [boxBetween([xa, y0, bottomZ[0]], [inner, y1, bottomZ[1]])] },
-      { id: `${type}-top`, type, label: `${type} for the ${o.top === 'panel' ? 'top' : 'stretchers'}`, faceDir: type === 'rabbet' ? '+Z' : faceDir, removed: [boxBetween([xa, y0, topZ[0]], [inner, y1, topZ[1]])] },
+      // Named by place along the side, so a left and a right side with the same cuts are one part.
+      { id: `${type}-bottom`, idTemplate: `${type}-{n}`, type, label: `${type} for the bottom or the top`, faceDir: type === 'rabbet' ? '-Z' : faceDir, removed: [boxBetween([xa, y0, bottomZ[0]], [inner, y1, bottomZ[1]])] },
+      { id: `${type}-top`, idTemplate: `${type}-{n}`, type, label: `${type} for the bottom or the top`, faceDir: type === 'rabbet' ? '+Z' : faceDir, removed: [boxBetween([xa, y0, topZ[0]], [inner, y1, topZ[1]])] },
       groove
         ? { id: 'groove-back', type: 'groove', label: 'groove for the back', faceDir, removed: [boxBetween([xa, backY[0], z0], [inner, backY[1], z1])] }
         : { id: 'rabbet-back', type: 'rabbet', label: 'rabbet for the back', faceDir: '+Y', removed: [boxBetween([xa, backY[0], z0], [inner, backY[1], z1])] },

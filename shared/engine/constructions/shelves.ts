@@ -80,7 +80,11 @@ export function shelves(o: ShelvesOptions): Shelves {
   const holeRowsZ: number[] = [];
   if (o.holes && o.adjustableZ.length > 0) {
     const h = o.holes;
-    for (let z = zb + h.endMarginMm; z <= zt - h.endMarginMm + 1e-9; z += h.spacingMm) {
+    // Centred on the inside height, so both sides drill alike and a side turned end for end is the same part.
+    const rows = Math.floor((zt - zb - 2 * h.endMarginMm) / h.spacingMm + 1e-9) + 1;
+    const first = (zb + zt) / 2 - ((rows - 1) * h.spacingMm) / 2;
+    for (let k = 0; k < rows; k++) {
+      const z = first + k * h.spacingMm;
       const clear = fixedDadoes.every((f) => z + h.diameterMm / 2 <= f.z0 - 1e-9 || z - h.diameterMm / 2 >= f.z1 + 1e-9);
       if (clear) holeRowsZ.push(z);
     }

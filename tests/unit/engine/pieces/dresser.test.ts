@@ -1,0 +1,168 @@
+import { describe, expect, it } from 'vitest';
+import { buildPiece, defaultSpec, paramDefs } from '../../../../shared/engine/index.ts';
+import type { Part, PieceResult } from '../../../../shared/engine/types.ts';
+import { isInputError } from '../../../../shared/errors.ts';
+
+const MM_TOLERANCE = 0.1;
+const IN = 25.4;
+
+function within(actual: number | undefined, expected: number): void {
+  expect(typeof actual).toBe('number');
+  expect(Math.abs(actual! - expected)).toBeLessThanOrEqual(MM_TOLERANCE);
+}
+
+function dresser(params: Record<string, unknown> = {}): PieceResult {
+  const spec = defaultSpec('dresser');
+  return buildPiece({ ...spec, params: { ...spec.params, ...params } });
+}
+
+function part(result: PieceResult, id: string): Part {
+  const found = result.parts.find((p) => p.id === id);
+  if (!found) throw new Error(`no part ${id}; parts: ${result.parts.map((p) => p.id).join(', ')}`);
+  return found;
+}
+
+describe('buildPiece (dresser), worked by hand', () => {
+  // The default six-drawer dresser, 56 × 20 × 34 in: 3/4 in hardwood plywood carcass (23/32 in
+  // actual, PS 1 category) with a 1/4 in back (7/32 in actual); a 3/4 in face frame with
+  // 1-1/2 in stiles and outer rails, 2 in rails between rows and a 2 in mullion; a 7/8 in top;
+  // a 4 in plinth; 1/2 in overlay fronts; side-mount slides (1/2 in each side, common practice).
+  const r = dresser();
+
+  it('shares the carcass height among the rows, each row 1 in taller than the one above', () => {
+    // Carcass: 34 − 4 plinth − 7/8 top = 29-1/8 in = 739.775 mm.
+    within(part(r, 'case-side').lengthMm, 739.775);
+    // Rows share 739.775 − 2 × 38.1 − 2 × 50.8 = 561.975 mm; h0 = (561.975 − 3 × 25.4) / 3 = 161.925.
+    // Mullions fill each row's opening: 161.925, 187.325, 212.725 mm.
+    const mullions = r.parts.filter((p) => p.id.startsWith('face-frame-mullion')).map((p) => p.lengthMm).sort((a, b) => a - b);
+    [161.925, 187.325, 212.725].forEach((h, i) => within(mullions[i], h));
+  });
+
+  it('overlays each drawer front 1/2 in on the frame all round', () => {
+    // Column: (1422.4 − 2 × 38.1 − 50.8) / 2 = 647.7 mm; front 647.7 + 2 × 12.7 = 673.1 mm.
+    // Top row: 161.925 + 25.4 = 187.325 mm tall.
+    const front = part(r, 'row-1-drawer-front');
+    within(front.lengthMm, 673.1);
+    within(front.widthMm, 187.325);
+    expect(front.quantity).toBe(2);
+    within(part(r, 'row-3-drawer-front').widthMm, 238.125);
+  });
+
+  it('sizes the boxes for side-mount slides and the longest slide that fits', () => {
+    // Box 647.7 − 2 × 12.7 = 622.3 mm wide; 161.925 − 12.7 above − 6.35 below = 142.875 mm tall.
+    // Depth: back's front face at 508 − 5.556 = 502.444; less 1 in behind = 477.04 → 18 in slide (457.2).
+    const side = part(r, 'row-1-drawer-side');
+    within(side.lengthMm, 457.2);
+    within(side.widthMm, 142.875);
+    expect(side.quantity).toBe(4);
+    // Box front between the sides plus a 1/4 in tongue each end: 622.3 − 25.4 + 12.7 = 609.6.
+    within(part(r, 'row-1-drawer-box-front').lengthMm, 609.6);
+    // Back sits on the bottom: 142.875 − 12.7 set-up − 5.556 bottom = 124.619.
+    within(part(r, 'row-1-drawer-back').widthMm, 124.619);
+  });
+
+  it('cuts the drawer bottom to the grooves, less 1/32 in at each edge', () => {
+    // Across: 609.6 − 2 × 0.794 = 608.0125; front to back: from 19.05 − 6.35 + 0.794 = 13.494 to
+    // the back's back face at 457.2 − 6.35 = 450.85 → 437.356 mm.
+    const bottom = part(r, 'drawer-bottom');
+    within(bottom.lengthMm, 608.0125);
+    within(bottom.widthMm, 437.356);
+    expect(bottom.quantity).toBe(6);
+  });
+
+  it('joins the box with tongues as thick as the dadoes are wide', () => {
+    const side = part(r, 'row-1-drawer-side');
+    const dado = side.features.find((f) => f.type === 'dado');
+    const tongue = part(r, 'row-1-drawer-box-front').features.find((f) => f.type === 'tongue');
+    expect(dado?.type === 'dado' && tongue?.type === 'tongue' && Math.abs(dado.widthMm - tongue.thicknessMm)).toBeLessThan(1e-9);
+    expect(dado?.type === 'dado' && tongue?.type === 'tongue' && Math.abs(dado.depthMm - tongue.lengthMm)).toBeLessThan(1e-9);
+  });
+
+  it('screws the solid top through round holes at the front and slots at the back', () => {
+    const front = part(r, 'front-stretcher');
+    const back = part(r, 'back-stretcher');
+    const screws = front.features.filter((f) => f.id.startsWith('screw-'));
+    expect(screws.length).toBeGreaterThanOrEqual(2);
+    expect(screws.every((f) => f.type === 'hole')).toBe(true);
+    expect(back.features.some((f) => f.type === 'slot')).toBe(true);
+    const topJoint = r.joints.find((j) => j.type === 'top-fastened' && j.members[0].partId === 'back-stretcher');
+    expect(topJoint?.floating).toBe(true);
+  });
+
+  it('measures the top of the top at the height asked, the top overhanging as asked', () => {
+    expect(r.bboxMm[2]).toBeCloseTo(34 * IN, 6);
+    expect(r.bboxMm[0]).toBeCloseTo(56 * IN + 2 * 0.75 * IN, 6);
+    expect(r.bboxMm[1]).toBeCloseTo(20 * IN + 1 * IN, 6);
+  });
+
+  it('cautions that the dresser can tip over, naming ASTM F2057', () => {
+    const c = r.checks.find((x) => x.id === 'tip-over');
+    expect(c?.severity).toBe('caution');
+    expect(c?.message).toMatch(/ASTM F2057/);
+    expect(c?.message).toMatch(/do not make the piece compliant or certify it safe/);
+  });
+
+  it('gives every parameter a label, group, default and (lengths and numbers) a range', () => {
+    for (const def of paramDefs('dresser')) {
+      expect(def.label.length).toBeGreaterThan(0);
+      expect(def.group.length).toBeGreaterThan(0);
+      if (def.kind === 'length' || def.kind === 'number') expect(def.min !== undefined && def.max !== undefined).toBe(true);
+    }
+  });
+});
+
+describe('buildPiece (dresser) options', () => {
+  it('makes inset fronts the opening less the reveal all round', () => {
+    // 647.7 − 2 × 1.5875 = 644.525 mm
+    const r = dresser({ frontMount: 'inset' });
+    within(part(r, 'row-1-drawer-front').lengthMm, 644.525);
+    within(part(r, 'row-1-drawer-front').widthMm, 161.925 - 3.175);
+  });
+
+  it('rides wooden runners level with the face-frame rails', () => {
+    const r = dresser({ slideType: 'wood-runners' });
+    expect(r.parts.some((p) => p.role === 'runner')).toBe(true);
+    // 1/32 in each side: 647.7 − 1.5875 = 646.1125 mm box, so the front is 646.1125 − 25.4 + 12.7.
+    within(part(r, 'row-1-drawer-box-front').lengthMm, 646.1125 - 12.7);
+  });
+
+  it('warns that uneven rails show uneven reveals around overlay fronts, and says which widths even them', () => {
+    const r = dresser({ faceFrameMidRail: 1.5 * IN });
+    const c = r.checks.find((x) => x.id === 'reveals-uneven');
+    expect(c?.severity).toBe('warning');
+    within(c?.numbers.midRailShowsMm, 12.7);
+    expect(c?.fix).toMatch(/50\.8 mm/);
+  });
+
+  it('flags a drawer deeper than the case as an error with the numbers', () => {
+    const r = dresser({ drawerDepth: 22 * IN });
+    const c = r.checks.find((x) => x.id.startsWith('drawer-too-deep'));
+    expect(c?.severity).toBe('error');
+    within(c?.numbers.boxDepthMm, 558.8);
+  });
+
+  it('flags boxes too tall for the slide when the clearances are too small', () => {
+    const r = dresser({ slideType: 'undermount', drawerTopClearance: 3, drawerBottomClearance: 3 });
+    expect(r.checks.some((x) => x.id.startsWith('drawer-too-tall') && x.severity === 'error')).toBe(true);
+  });
+
+  it('refuses wooden runners without a face frame, naming slideType', () => {
+    try {
+      dresser({ faceFrame: false, slideType: 'wood-runners' });
+      expect.unreachable();
+    } catch (error) {
+      expect(isInputError(error)).toBe(true);
+      expect((error as { field: string }).field).toBe('slideType');
+    }
+  });
+
+  it('refuses a graduation that leaves a row too short, naming the graduation parameter', () => {
+    try {
+      dresser({ drawerRows: 6, drawerColumns: 1, drawerGraduation: 'geometric', graduationRatio: 1.5 });
+      expect.unreachable();
+    } catch (error) {
+      expect(isInputError(error)).toBe(true);
+      expect((error as { field: string }).field).toBe('graduationRatio');
+    }
+  });
+});
