@@ -3,6 +3,7 @@ import { registerCutlist } from './cutlist.ts';
 import { registerEmc } from './emc.ts';
 import { registerFit } from './fit.ts';
 import { registerFloat } from './float.ts';
+import { registerLayout } from './layout.ts';
 import { registerMovement } from './movement.ts';
 import { registerPlan } from './plan.ts';
 
@@ -10,4 +11,4 @@ import { registerPlan } from './plan.ts';
 export type RegisterCommand = (program: Command) => void;
 
 /** Every command of the command line, in the order `--help` lists them. */
-export const commands: RegisterCommand[] = [registerEmc, registerMovement, registerFloat, registerCutlist, registerPlan, registerFit];
+export const commands: RegisterCommand[] = [registerEmc, registerMovement, registerFloat, registerCutlist, registerPlan, registerFit, registerLayout];
