@@ -58,20 +58,27 @@ export interface Assembled {
 
 const round6 = (n: number): number => Math.round(n * 1e6) / 1e6;
 
-// A compact key of plain data with numbers snapped to 0.1 µm, so binary noise never splits
+// A compact key of a part's shape: numbers snapped to 0.1 µm so binary noise never splits
 // identical parts. The grid is offset by 0.3 of a step: inch fractions and 0.1 mm values land
-// on multiples of 1/8 step and never near a snapping boundary.
+// on multiples of 1/8 step and never near a snapping boundary. Every measured number of a
+// feature follows from its boxes, so the boxes, type, face and id are the whole key.
 const snap = (n: number): number => Math.round(n * 1e4 + 0.3);
-function key(value: unknown): string {
-  if (typeof value === 'number') return String(snap(value));
-  if (Array.isArray(value)) return `[${value.map(key).join(',')}]`;
-  if (value && typeof value === 'object') return `{${Object.entries(value).map(([k, v]) => `${k}:${key(v)}`).join(',')}}`;
-  return String(value);
+
+function pushBox(out: (string | number)[], box: Box3): void {
+  out.push(snap(box.min[0]), snap(box.min[1]), snap(box.min[2]), snap(box.max[0]), snap(box.max[1]), snap(box.max[2]));
 }
 
 function signature(draft: PartDraft, features: readonly Feature[]): string {
   const material = draft.material.kind === 'solid' ? draft.material.speciesId : draft.material.sheetId;
-  return `${draft.role}|${material}|${draft.grain}|${key(draft.size)}|${draft.glueUp?.boards ?? 0}|${key(features)}`;
+  const out: (string | number)[] = [draft.role, material, draft.grain, snap(draft.size[0]), snap(draft.size[1]), snap(draft.size[2]), draft.glueUp?.boards ?? 0];
+  for (const f of features) {
+    out.push('|', f.id, f.type, f.face);
+    for (const box of f.removed) pushBox(out, box);
+    if (f.type === 'tongue') pushBox(out, f.tongue);
+    if (f.type === 'hole' || f.type === 'slot') out.push(snap(f.diameterMm));
+    if (f.type === 'slot') out.push(snap(f.slotLengthMm));
+  }
+  return out.join(',');
 }
 
 /** The same part turned end for end about its thickness axis: still a rotation. */
@@ -101,7 +108,7 @@ function describeAll(draft: PartDraft, axes: AxisMap): { features: Feature[]; id
       id = fd.idTemplate.replace('{face}', feature.face).replace('{n}', String(n));
     }
     ids.set(fd.id, id);
-    renamed.set(feature, id === feature.id ? feature : { ...feature, id });
+    renamed.set(feature, id === feature.id ? feature : Object.assign({}, feature, { id }));
   }
   const features = described.map((f) => renamed.get(f)!).sort((a, b) => (a.id < b.id ? -1 : a.id > b.id ? 1 : 0));
   return { features, ids };
@@ -114,16 +121,19 @@ export function assemble(drafts: readonly PartDraft[], joints: readonly JointDra
   // a leg still reads from its foot.
   const classes = new Map<string, { drafts: PartDraft[]; features: Feature[] }>();
   const chosen = new Map<PartDraft, { axes: AxisMap; ids: Map<string, string> }>();
+  const groupsSeen = new Set<string>();
   for (const draft of drafts) {
     const a = describeAll(draft, draft.axes);
     const keyA = `${draft.group}|${signature(draft, a.features)}`;
     let pick = { key: keyA, axes: draft.axes, described: a };
-    if (!classes.has(keyA)) {
+    // Only a group already holding a part can hold this one's turned twin.
+    if (!classes.has(keyA) && groupsSeen.has(draft.group)) {
       const other = turned(draft.axes);
       const b = describeAll(draft, other);
       const keyB = `${draft.group}|${signature(draft, b.features)}`;
       if (classes.has(keyB)) pick = { key: keyB, axes: other, described: b };
     }
+    groupsSeen.add(draft.group);
     chosen.set(draft, { axes: pick.axes, ids: pick.described.ids });
     const existing = classes.get(pick.key);
     if (existing) existing.drafts.push(draft);
@@ -148,7 +158,7 @@ export function assemble(drafts: readonly PartDraft[], joints: readonly JointDra
       features, notes: first.notes,
       ...(first.glueUp ? { glueUp: first.glueUp } : {}),
     };
-    parts.push({ ...body, rough: roughFor(body), quantity: same.length });
+    parts.push(Object.assign({}, body, { rough: roughFor(body), quantity: same.length }));
     same.forEach((draft, instance) => {
       partIdOf.set(draft, id);
       placements.push(placeInto(id, instance, draft.label, draft.size, chosen.get(draft)!.axes, draft.world, draft.explodeMm));

@@ -122,7 +122,7 @@ export function stoppedGrooveCheck(legIds: readonly string[], stopMm: number): C
 
 /** A panel thinner than its groove rattles. */
 export function panelThicknessCheck(partIds: readonly string[], panelMm: number, grooveWidthMm: number): Check[] {
-  if (panelMm >= grooveWidthMm - 0.01) return [];
+  if (panelMm >= grooveWidthMm - 1e-6) return [];
   return [check({
     id: 'panel-thinner-than-groove', severity: 'warning', title: 'Panels thinner than their grooves', partIds,
     numbers: { panelThicknessMm: panelMm, grooveWidthMm },

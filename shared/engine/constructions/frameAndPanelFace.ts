@@ -92,6 +92,9 @@ export interface FrameAndPanelFace {
 
 type WallDir = '+u' | '-u' | '+v' | '-v' | '+w' | '-w';
 
+/** A stop shorter than a nanometre is no stop: the groove runs out and the tongue has no haunch. */
+const MIN_CUT_MM = 1e-6;
+
 const box = (u0: number, u1: number, v0: number, v1: number, w0: number, w1: number): Box3 => boxBetween([u0, v0, w0], [u1, v1, w1]);
 
 /** Builds the rails, stiles and panels of one frame-and-panel face and the grooves its posts need. */
@@ -111,7 +114,7 @@ export function frameAndPanelFace(o: FrameAndPanelFaceOptions): FrameAndPanelFac
   const gw = o.grooveWidthMm;
   const fgd = o.frameGrooveDepthMm;
   const tl = o.railTongueLengthMm;
-  const stop = o.postGrooveStopMm;
+  const stop = o.postGrooveStopMm < MIN_CUT_MM ? 0 : o.postGrooveStopMm;
   const wOut = -o.railInsetMm;
   const wIn = wOut - T;
   const wc = (wIn + wOut) / 2;

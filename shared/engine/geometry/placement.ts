@@ -14,6 +14,12 @@ function parseAxis(axis: WorldAxis): { index: 0 | 1 | 2; sign: 1 | -1 } {
   return { index: AXIS_INDEX[axis[1] as 'X' | 'Y' | 'Z'], sign: axis[0] === '-' ? -1 : 1 };
 }
 
+// Hot paths below use plain loops: the engine places every part and cut of a piece on each
+// keystroke, and per-call closures cost more than the arithmetic.
+function localAxes(axes: AxisMap): readonly [WorldAxis, WorldAxis, WorldAxis] {
+  return [axes.length, axes.width, axes.thickness];
+}
+
 /** The 3×3 rotation matrix of `axes`, columns = where local x, y, z point. */
 export function axisMatrix(axes: AxisMap): number[][] {
   const m = [
@@ -21,10 +27,11 @@ export function axisMatrix(axes: AxisMap): number[][] {
     [0, 0, 0],
     [0, 0, 0],
   ];
-  [axes.length, axes.width, axes.thickness].forEach((axis, column) => {
-    const { index, sign } = parseAxis(axis);
+  const list = localAxes(axes);
+  for (let column = 0; column < 3; column++) {
+    const { index, sign } = parseAxis(list[column]!);
     m[index]![column] = sign;
-  });
+  }
   return m;
 }
 
@@ -42,9 +49,8 @@ export function axisDeterminant(axes: AxisMap): number {
 /** The part's size along world X, Y and Z once turned by `axes`, mm. */
 export function worldSize(axes: AxisMap, size: Vec3): Vec3 {
   const out: [number, number, number] = [0, 0, 0];
-  [axes.length, axes.width, axes.thickness].forEach((axis, i) => {
-    out[parseAxis(axis).index] = size[i]!;
-  });
+  const list = localAxes(axes);
+  for (let i = 0; i < 3; i++) out[parseAxis(list[i]!).index] = size[i]!;
   return out;
 }
 
@@ -55,13 +61,14 @@ export function worldSize(axes: AxisMap, size: Vec3): Vec3 {
 export function localBoxToWorld(box: Box3, size: Vec3, axes: AxisMap, positionMm: Vec3): Box3 {
   const min: [number, number, number] = [0, 0, 0];
   const max: [number, number, number] = [0, 0, 0];
-  [axes.length, axes.width, axes.thickness].forEach((axis, i) => {
-    const { index, sign } = parseAxis(axis);
+  const list = localAxes(axes);
+  for (let i = 0; i < 3; i++) {
+    const { index, sign } = parseAxis(list[i]!);
     const lo = sign > 0 ? box.min[i]! : size[i]! - box.max[i]!;
     const hi = sign > 0 ? box.max[i]! : size[i]! - box.min[i]!;
     min[index] = positionMm[index]! + lo;
     max[index] = positionMm[index]! + hi;
-  });
+  }
   return { min, max };
 }
 
@@ -78,11 +85,11 @@ export function placeInto(
   world: Box3,
   explodeMm: Vec3,
 ): Placement {
-  assert(axisDeterminant(axes) === 1, `placement of ${partId} must be a rotation, not a mirror`);
+  if (axisDeterminant(axes) !== 1) assert(false, `placement of ${partId} must be a rotation, not a mirror`);
   const turned = worldSize(axes, size);
   for (let i = 0; i < 3; i++) {
     const span = world.max[i]! - world.min[i]!;
-    assert(Math.abs(span - turned[i]!) < 1e-6, `${partId} does not fill its place on axis ${i}: ${span} vs ${turned[i]}`);
+    if (Math.abs(span - turned[i]!) >= 1e-6) assert(false, `${partId} does not fill its place on axis ${i}: ${span} vs ${turned[i]}`);
   }
   return { partId, instance, label, positionMm: world.min, axes, explodeMm };
 }
@@ -91,13 +98,14 @@ export function placeInto(
 export function worldBoxToLocal(box: Box3, size: Vec3, axes: AxisMap, positionMm: Vec3): Box3 {
   const min: [number, number, number] = [0, 0, 0];
   const max: [number, number, number] = [0, 0, 0];
-  [axes.length, axes.width, axes.thickness].forEach((axis, i) => {
-    const { index, sign } = parseAxis(axis);
+  const list = localAxes(axes);
+  for (let i = 0; i < 3; i++) {
+    const { index, sign } = parseAxis(list[i]!);
     const lo = box.min[index]! - positionMm[index]!;
     const hi = box.max[index]! - positionMm[index]!;
     min[i] = sign > 0 ? lo : size[i]! - hi;
     max[i] = sign > 0 ? hi : size[i]! - lo;
-  });
+  }
   return { min, max };
 }
 
@@ -110,10 +118,12 @@ const FACE_BY_LOCAL: readonly (readonly [PartFace, PartFace])[] = [
 /** The face of a placed part that looks toward the world direction `direction`. */
 export function localFaceOf(axes: AxisMap, direction: WorldAxis): PartFace {
   const wanted = parseAxis(direction);
-  const local = [axes.length, axes.width, axes.thickness].findIndex((axis) => parseAxis(axis).index === wanted.index);
-  assert(local >= 0, `no local axis maps to ${direction}`);
-  const sign = parseAxis([axes.length, axes.width, axes.thickness][local]!).sign * wanted.sign;
-  return FACE_BY_LOCAL[local]![sign > 0 ? 1 : 0]!;
+  const list = localAxes(axes);
+  for (let local = 0; local < 3; local++) {
+    const axis = parseAxis(list[local]!);
+    if (axis.index === wanted.index) return FACE_BY_LOCAL[local]![axis.sign * wanted.sign > 0 ? 1 : 0]!;
+  }
+  throw new Error(`Assertion failed: no local axis maps to ${direction}`);
 }
 
 /** The world direction opposite `axis`. */

@@ -13,7 +13,8 @@ export interface FitProblem {
   reason: string;
 }
 
-const TOLERANCE_MM = 1e-6;
+/** Parts merged as identical may differ by up to 0.1 µm (the engine's merge grid). */
+const TOLERANCE_MM = 1e-4;
 
 export function tongueFitProblems(result: PieceResult): FitProblem[] {
   const parts = new Map(result.parts.map((p) => [p.id, p]));
@@ -43,7 +44,7 @@ export function tongueFitProblems(result: PieceResult): FitProblem[] {
         const widthOk = gaps.some(({ lo, hi }) => Math.abs(lo) < TOLERANCE_MM && Math.abs(hi) < TOLERANCE_MM);
         if (!widthOk) problems.push({ joint: joint.id, instance: pl.label, reason: 'tongue is not as thick as the groove is wide' });
         const endGaps = gaps.flatMap(({ lo, hi }) => (Math.abs(lo) < TOLERANCE_MM ? [hi] : Math.abs(hi) < TOLERANCE_MM ? [lo] : []));
-        if (!endGaps.some((g) => Math.abs(g - joint.clearanceMm) < 1e-6)) {
+        if (!endGaps.some((g) => Math.abs(g - joint.clearanceMm) < TOLERANCE_MM)) {
           problems.push({ joint: joint.id, instance: pl.label, reason: `no end gap equals the stated clearance ${joint.clearanceMm}` });
         }
       }
