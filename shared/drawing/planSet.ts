@@ -33,7 +33,7 @@ export interface PlanSetOptions {
 }
 
 /** Height of a part sheet's heading, mm. */
-const HEADING_MM = 13;
+const HEADING_MM = 16;
 /** Share of the drawing area's height part views may always take, however long the feature table. */
 const PART_VIEWS_MIN_SHARE = 0.66;
 /** Height a feature-table row and the table's title and footnote take, mm (7.5 pt rows). */
@@ -156,10 +156,11 @@ function partSheet(part: Part, letter: string, spec: SheetSpec, units: DrawingUn
       head: ['Cut', 'Where', 'Sizes', 'For'],
       rows: part.features.map((f) => [featureKindText(f), featureFaceText(f), featureSizeText(f, units), f.label]),
       numericColumns: [],
-      footnote: 'Faces: A and B are the broad faces, edges A and B the long edges, ends A and B the ends; A is the left end in the face view. Offsets are from the reference (A) side.',
     });
   }
-  if (part.notes.length) flow.push({ type: 'text', title: 'Notes', paragraphs: part.notes, bullets: true });
+  // Notes and the key to face names go under the heading, so the page never spills a line onto another.
+  const key = 'Faces A/B: broad faces; edges A/B: long edges; ends A/B: ends, end A at the left of the face view; offsets from the A side.';
+  heading.push({ type: 'label', at: [area.x, area.y + 14.5], text: part.notes.length ? `Notes: ${part.notes.join('; ')}.  ${key}` : key, sizePt: 6.5, anchor: 'start', font: 'sans' });
   const primitives: Primitive[] = [...heading];
   return { ...emptySheet(spec, `Part ${letter}: ${part.name}`, flow, { x: area.x, y: flowTop, w: area.w, h: area.y + area.h - flowTop }), views, primitives };
 }
