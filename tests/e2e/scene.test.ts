@@ -101,7 +101,9 @@ async function shot(name: string) {
   await page.locator(VIEW).screenshot({ path: join(SCREENSHOT_DIR, `${name}.png`) });
 }
 
-describe('the 3D view in the design editor', () => {
+// Software WebGL on a busy two-core machine can take a minute for the four preset views; the
+// limit only stops a hung browser, it does not measure speed.
+describe('the 3D view in the design editor', { timeout: 300_000 }, () => {
   let assembled: CanvasLook;
 
   it('draws a new chest: every part instance the engine places, in wood on the paper', async () => {
