@@ -115,7 +115,7 @@ function explodedSheet(result: PieceResult, spec: SheetSpec, units: DrawingUnits
 }
 
 /** Lays out a part's three views: main scale for face and edge, the end view as large as fits. */
-function fitPartViews(part: Part, area: Rect, units: DrawingUnits): PlacedView[] {
+function fitPartViews(part: Part, area: Rect, units: DrawingUnits, maxHeight: number): PlacedView[] {
   const { face, edge, end } = partViews(part, units);
   const scales = usualScales(units);
   for (const s of scales) {
@@ -125,11 +125,11 @@ function fitPartViews(part: Part, area: Rect, units: DrawingUnits): PlacedView[]
       if (frame.w <= area.w && frame.h <= area.h) return centreIn(views, frame, area, true);
     }
   }
-  // Nothing fits the height: take the largest scale that fits the width; the cut table then
-  // starts below the views and continues on the next page if it must.
+  // Nothing fits beside the cut table: let the views take the page down to the title block; the
+  // table then starts below them and continues on the next page.
   for (const s of scales) {
     const { views, frame } = arrangeAt([{ view: face, place: 'anchor' }, { view: edge, place: 'below' }, { view: end, place: 'right' }], s);
-    if (frame.w <= area.w || s === scales[scales.length - 1]) return centreIn(views, frame, area, true);
+    if ((frame.w <= area.w && frame.h <= maxHeight) || s === scales[scales.length - 1]) return centreIn(views, frame, area, true);
   }
   throw new Error('Assertion failed: usualScales is never empty');
 }
@@ -140,7 +140,7 @@ function partSheet(part: Part, letter: string, spec: SheetSpec, units: DrawingUn
   const flowNeed = (part.features.length ? TABLE_EXTRA_MM + part.features.length * TABLE_ROW_MM : 0) + (part.notes.length ? 10 + part.notes.length * 5 : 0);
   const viewsH = Math.max((area.h - HEADING_MM) * PART_VIEWS_MIN_SHARE, area.h - HEADING_MM - flowNeed);
   const viewsArea: Rect = { x: area.x, y: area.y + HEADING_MM, w: area.w, h: viewsH };
-  const views = fitPartViews(part, viewsArea, units);
+  const views = fitPartViews(part, viewsArea, units, area.h - HEADING_MM);
   const used = rectUnion(views.map((v) => v.frame));
   const flowTop = used.y + used.h + 4;
   const material = part.material.kind === 'solid' ? part.material.speciesName : part.material.sheetName;
@@ -160,7 +160,7 @@ function partSheet(part: Part, letter: string, spec: SheetSpec, units: DrawingUn
   }
   // Notes and the key to face names go under the heading, so the page never spills a line onto another.
   const key = 'Faces A/B: broad faces; edges A/B: long edges; ends A/B: ends, end A at the left of the face view; offsets from the A side.';
-  heading.push({ type: 'label', at: [area.x, area.y + 14.5], text: part.notes.length ? `Notes: ${part.notes.join('; ')}.  ${key}` : key, sizePt: 6.5, anchor: 'start', font: 'sans' });
+  heading.push({ type: 'label', at: [area.x, area.y + 14.5], text: part.notes.length ? `Notes: ${part.notes.map((n) => n.replace(/\.$/, '')).join('; ')}.  ${key}` : key, sizePt: 6.5, anchor: 'start', font: 'sans' });
   const primitives: Primitive[] = [...heading];
   return { ...emptySheet(spec, `Part ${letter}: ${part.name}`, flow, { x: area.x, y: flowTop, w: area.w, h: area.y + area.h - flowTop }), views, primitives };
 }
