@@ -38,6 +38,14 @@ export class Client {
   readonly agent: ReturnType<typeof request.agent>;
   csrf = '';
   user: { id: string; email: string; name: string } | null = null;
+  /** `casewright.sid=…` as last set by the server (on sign-in; sessions do not roll). */
+  sessionCookie = '';
+
+  /** Remember the session cookie a response set. */
+  keepCookie(res: request.Response): void {
+    const set = ([] as string[]).concat(res.headers['set-cookie'] ?? []).find((c) => c.startsWith('casewright.sid='));
+    if (set) this.sessionCookie = set.split(';')[0]!;
+  }
 
   constructor(app: Express) {
     this.agent = request.agent(app);
@@ -74,6 +82,7 @@ export class Client {
     if (res.status === 200) {
       this.csrf = res.body.csrfToken;
       this.user = res.body.user;
+      this.keepCookie(res);
     }
     return res;
   }
@@ -91,6 +100,7 @@ export async function signUp(app: Express, label: string, name = `Test ${label}`
   if (res.status !== 201) throw new Error(`register answered ${res.status}: ${JSON.stringify(res.body)}`);
   client.csrf = res.body.csrfToken;
   client.user = res.body.user;
+  client.keepCookie(res);
   return client;
 }
 
