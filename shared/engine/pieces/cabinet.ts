@@ -9,7 +9,7 @@ import { getSheetGood } from '../../wood/sheetGoods.ts';
 import type { Check, ParamValue, PieceSpec } from '../types.ts';
 import { both, check } from '../checks/check.ts';
 import { tipOverCheck } from '../checks/tipOver.ts';
-import { buildCase, type CaseBuild, type CaseExtras } from './caseBuild.ts';
+import { buildCase, doorPanelFloat, type CaseBuild, type CaseExtras } from './caseBuild.ts';
 import { caseLayout, type CasePlan } from './caseLayout.ts';
 import type { CabinetParams } from './cabinetParams.ts';
 
@@ -68,6 +68,9 @@ export function validateCabinetCombinations(params: Readonly<Record<string, Para
     if (p.doorTongueClearance >= p.doorGrooveDepth / 2) fail('doorTongueClearance', 'the clearance leaves too little tongue', `less than ${r(p.doorGrooveDepth / 2)} mm`);
     const panelT = p.doorPanel === 'solid' ? p.doorPanelThickness : getSheetGood(p.doorPanelSheet, 'doorPanelSheet').thicknessMm;
     const most = (p.frontThickness + p.doorGrooveWidth) / 2;
+    const { float } = doorPanelFloat(cabinetExtras(p).doors!, w, p.species, climate);
+    const need = float.gapEachSideMm + 0.5;
+    if (need > p.doorGrooveDepth) fail('doorGrooveDepth', `the door panels need ${r(float.gapEachSideMm)} mm of float each side, which leaves no tongue in a ${r(p.doorGrooveDepth)} mm groove`, `at least ${r(need)} mm (or a plywood panel)`);
     if (panelT > most + 1e-9) fail(p.doorPanel === 'solid' ? 'doorPanelThickness' : 'doorPanelSheet', `a ${r(panelT)} mm panel would stand proud of the door frame's back`, `at most ${r(most)} mm`);
   }
   const shelfT = p.shelfMaterial === 'sheet' ? getSheetGood(p.shelfSheet, 'shelfSheet').thicknessMm : p.shelfThickness;

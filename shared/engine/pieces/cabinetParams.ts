@@ -30,7 +30,7 @@ export const CABINET_PARAMS: readonly ParamDef[] = [
   { key: 'doorStyle', label: 'Door style', group: GROUPS.doors, kind: 'enum', default: 'frame-and-panel', options: [{ value: 'frame-and-panel', label: 'Frame and panel' }, { value: 'slab', label: 'Slab' }] },
   { key: 'doorStileWidth', label: 'Door stile width', group: GROUPS.doors, kind: 'length', default: 2.25 * IN, min: 25, max: 150 },
   { key: 'doorRailWidth', label: 'Door rail width', group: GROUPS.doors, kind: 'length', default: 2.25 * IN, min: 25, max: 200 },
-  { key: 'doorGrooveWidth', label: 'Door groove width', group: GROUPS.doors, kind: 'length', default: 0.25 * IN, min: 3, max: 15 },
+  { key: 'doorGrooveWidth', label: 'Door groove width', group: GROUPS.doors, kind: 'length', default: (7 / 32) * IN, min: 3, max: 15, help: '7/32 in fits 1/4 in plywood, which measures about 7/32 in; match it to the panel.' },
   { key: 'doorGrooveDepth', label: 'Door groove depth', group: GROUPS.doors, kind: 'length', default: 0.375 * IN, min: 4, max: 20 },
   { key: 'doorTongueClearance', label: 'Door tongue end clearance', group: GROUPS.doors, kind: 'length', default: 0.0625 * IN, min: 0, max: 5 },
   { key: 'doorPanel', label: 'Door panel', group: GROUPS.doors, kind: 'enum', default: 'plywood', options: [{ value: 'plywood', label: 'Sheet (plywood or MDF)' }, { value: 'solid', label: 'Solid wood, floating' }] },

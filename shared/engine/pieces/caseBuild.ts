@@ -3,11 +3,12 @@
  * shelves, face frame, top, and the drawers or doors in the grid, then the checks. The pieces
  * differ only in what they ask for; every part comes from the shared constructions.
  */
-import { panelFloat } from '../../wood/float.ts';
+import type { Climate } from '../../wood/climate.ts';
+import { panelFloat, type PanelFloat } from '../../wood/float.ts';
 import { planGlueUp } from '../../wood/glueUp.ts';
 import { getSheetGood, type SheetGoodId } from '../../wood/sheetGoods.ts';
 import { sheetStiffness } from '../../wood/sheetStiffness.ts';
-import { getSpecies } from '../../wood/species.ts';
+import { getSpecies, type SpeciesId } from '../../wood/species.ts';
 import { assemble, type JointDraft, type PartDraft } from '../assembly.ts';
 import { caseBase } from '../constructions/caseBase.ts';
 import { caseTop, stretcherFasteners } from '../constructions/caseTop.ts';
@@ -23,6 +24,7 @@ import { sectionStiffnessNmm2, type SectionPiece } from '../structure/beam.ts';
 import type { Check, GlueUpPlan, Material } from '../types.ts';
 import { drawerFitChecks } from '../checks/drawerFit.ts';
 import { frontClearanceChecks, revealChecks, type FrontFacts } from '../checks/fronts.ts';
+import { panelThicknessCheck } from '../checks/joinery.ts';
 import { panelFloatCheck } from '../checks/panelFloat.ts';
 import { shelfSagCheck } from '../checks/shelfSag.ts';
 import { stockSizeChecks } from '../checks/stock.ts';
@@ -57,6 +59,14 @@ export interface CaseExtras {
   shelves?: ShelfOptions;
   /** Checks only the piece knows (tip-over, work surface), given the built parts' ids. */
   pieceChecks: (partIds: readonly string[], layout: CaseLayout) => Check[];
+}
+
+/** The float a door's panel needs: its width across the grain (mm) and the wood library's answer. */
+export function doorPanelFloat(dO: DoorOptions, doorWidthMm: number, speciesId: SpeciesId, climate: Climate): { acrossGrain: number; float: PanelFloat } {
+  // Door panels stand with their grain vertical, so they move side to side into the stiles.
+  const acrossGrain = doorWidthMm - 2 * dO.frame.stileWidthMm + 2 * dO.frame.grooveDepthMm;
+  const float = panelFloat({ panelWidthMm: acrossGrain, material: dO.frame.panel === 'solid' ? speciesId : dO.frame.panelSheet, sawn: 'unknown', grooveDepthMm: dO.frame.grooveDepthMm, climate });
+  return { acrossGrain, float };
 }
 
 /** What a builder returns before derived outputs: the chest's shape. */
@@ -225,9 +235,7 @@ export function buildCase(plan: CasePlan, extras: CaseExtras): CaseBuild {
     const panelMaterial = dO.frame.panel === 'solid' ? solid : sheet(dO.frame.panelSheet);
     const panelT = dO.frame.panel === 'solid' ? dO.frame.panelThicknessMm : getSheetGood(dO.frame.panelSheet, 'doorPanelSheet').thicknessMm;
     const first = lay.grid.cells[0]!.fronts[0]!;
-    const bayW = first.x[1] - first.x[0] - 2 * dO.frame.stileWidthMm;
-    const acrossGrain = bayW + 2 * dO.frame.grooveDepthMm;
-    const float = panelFloat({ panelWidthMm: acrossGrain, material: dO.frame.panel === 'solid' ? species.id : dO.frame.panelSheet, sawn: 'unknown', grooveDepthMm: dO.frame.grooveDepthMm, climate: plan.climate });
+    const { acrossGrain, float } = doorPanelFloat(dO, first.x[1] - first.x[0], species.id, plan.climate);
     const paintNote = p.finish === 'paint' ? 'Prime and paint the panel before glue-up, so no raw line shows when it shrinks; keep paint from gluing it to the frame.' : 'Finish the panel before glue-up, so no unfinished line shows when it shrinks.';
     let n = 0;
     for (const cell of lay.grid.cells) {
@@ -256,7 +264,10 @@ export function buildCase(plan: CasePlan, extras: CaseExtras): CaseBuild {
         fronts.push({ facts: { id: `door-${n}`, label: `${member.replace('-', ' ')}`, kind: 'door', hinge: fb.hinge, x: fb.x, z: fb.z, thicknessMm: p.frontThickness }, draft: leaf.hingePart });
       }
     }
-    if (dO.style === 'frame-and-panel') checks.push({ ...panelFloatCheck([], 'door', acrossGrain, dO.frame.grooveDepthMm, float), partIds: [] });
+    if (dO.style === 'frame-and-panel') {
+      checks.push({ ...panelFloatCheck([], 'door', acrossGrain, dO.frame.grooveDepthMm, float), partIds: [] });
+      checks.push(...panelThicknessCheck([], panelT, dO.frame.grooveWidthMm));
+    }
   }
 
   const assembled = assemble(drafts, joints, roughSizer(p));
@@ -265,8 +276,9 @@ export function buildCase(plan: CasePlan, extras: CaseExtras): CaseBuild {
   const bbox = boxUnion(drafts.map((d) => d.world));
 
   // Panel float names its parts now that they have ids.
-  const floatIdx = checks.findIndex((c) => c.id.startsWith('panel-float'));
-  if (floatIdx >= 0) checks[floatIdx] = { ...checks[floatIdx]!, partIds: idsOf(doorPanels) };
+  checks.forEach((c, i) => {
+    if (c.id.startsWith('panel-float') || c.id === 'panel-thinner-than-groove') checks[i] = { ...c, partIds: idsOf(doorPanels) };
+  });
 
   for (const df of drawerFacts) {
     const dl = df.layout;

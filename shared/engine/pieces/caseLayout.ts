@@ -129,6 +129,9 @@ export function caseLayout(plan: CasePlan): CaseLayout {
   const frame: FrameWidths | null = p.faceFrame
     ? { stileMm: p.faceFrameStile, topRailMm: p.faceFrameTopRail, bottomRailMm: p.faceFrameBottomRail, midRailMm: p.faceFrameMidRail, mullionMm: p.faceFrameMullion }
     : null;
+  // The frame's outer rails hide the carcass bottom and top, so nothing stands in the openings.
+  if (frame && frame.bottomRailMm < e + t - 1e-9) fail('faceFrameBottomRail', `a ${r(frame.bottomRailMm)} mm bottom rail leaves the carcass bottom showing in the openings`, `at least ${r(e + t)} mm`);
+  if (frame && frame.topRailMm < e + t - 1e-9) fail('faceFrameTopRail', `a ${r(frame.topRailMm)} mm top rail leaves the carcass top showing in the openings`, `at least ${r(e + t)} mm`);
   if (frame && p.frontMount === 'overlay') {
     const most = Math.min(frame.stileMm, frame.topRailMm, frame.bottomRailMm);
     if (p.overlay > most + 1e-9) fail('overlay', `a ${r(p.overlay)} mm overlay reaches past the face frame's outer edge`, `at most ${r(most)} mm (the narrowest stile or outer rail)`);
