@@ -9,12 +9,17 @@
  *    are not the lid) and the underside of the lid, running along X;
  *  - the lid's opening angle: the spec's `lidOpenAngle` parameter (degrees) when present, else
  *    {@link DEFAULT_LID_OPEN_ANGLE_DEG};
- *  - doors and drawers: the result has no door or drawer roles yet, so none are read.
+ *  - doors: each group of touching `door`, `door-frame` and `door-panel` instances is one leaf,
+ *    hinged on the side away from the piece's middle (left when it is at or left of the middle,
+ *    the engine's own rule for laying out leaves), about its edge on its front face;
+ *  - drawers: each group of touching drawer parts is one drawer, on full-extension slides: it
+ *    travels the length of its sides.
  */
 import { boxAt, boxUnion, boxVolume } from '../engine/geometry/box.ts';
 import { worldSize } from '../engine/geometry/placement.ts';
 import type { Box3, PieceKind, PieceResult } from '../engine/types.ts';
 import { assert } from '../assert.ts';
+import { touchingGroups } from './partClusters.ts';
 
 /**
  * Lid opening angle when the design does not give one, degrees from closed: upright, where a
@@ -87,13 +92,19 @@ export interface PieceEnvelope {
 }
 
 const LID_ROLES: ReadonlySet<string> = new Set(['lid', 'batten']);
+const DOOR_ROLES: ReadonlySet<string> = new Set(['door', 'door-frame', 'door-panel']);
+const DRAWER_ROLES: ReadonlySet<string> = new Set(['drawer-front', 'drawer-side', 'drawer-end', 'drawer-bottom']);
+
+/** Degrees a door of the piece opens to when the result does not say: room fit checks 90°. */
+const DOOR_OPEN_ANGLE_DEG = 90;
 
 /** Reads the envelope of an engine result. */
 export function envelopeFromResult(result: PieceResult): PieceEnvelope {
   const parts = placedParts(result);
   assert(parts.length > 0, 'a piece result has at least one placed part');
   const lidParts = parts.filter((p) => LID_ROLES.has(p.role));
-  const caseParts = parts.filter((p) => !LID_ROLES.has(p.role));
+  const caseParts = parts.filter((p) => !LID_ROLES.has(p.role) && !DOOR_ROLES.has(p.role) && !DRAWER_ROLES.has(p.role));
+  const box = boxUnion(parts.map((p) => p.box));
   const assumptions: string[] = [];
 
   let lid: LidOpening | null = null;
@@ -110,25 +121,46 @@ export function envelopeFromResult(result: PieceResult): PieceEnvelope {
     }
   }
 
+  const doors = doorsOf(parts, box);
+  const drawers = drawersOf(parts);
+  if (doors.length > 0) assumptions.push('doors hinged on the side away from the middle of the piece, about their outer front edge');
+  if (drawers.length > 0) assumptions.push('drawers on full-extension slides: each travels the length of its sides');
+
   const subassemblies: Subassembly[] = [];
-  if (lid) {
-    subassemblies.push(group('case', 'case without the lid', caseParts));
-    subassemblies.push(group('lid', 'lid', lidParts));
+  const removable = lidParts.length + doors.length + drawers.length > 0 && caseParts.length > 0;
+  if (removable) {
+    subassemblies.push(group('case', lid ? 'case without the lid' : 'case without its doors and drawers', caseParts));
+    if (lidParts.length > 0) subassemblies.push(group('lid', 'lid', lidParts));
+    for (const door of doors) subassemblies.push(group(door.id, door.id.replace('-', ' '), door.parts));
+    for (const drawer of drawers) subassemblies.push(group(drawer.id, drawer.id.replace('-', ' '), drawer.parts));
     subassemblies.sort((a, b) => boxVolume(b.box) - boxVolume(a.box));
   } else {
     subassemblies.push(group('whole', 'whole piece', parts));
   }
 
-  return {
-    kind: result.kind,
-    box: boxUnion(parts.map((p) => p.box)),
-    parts,
-    lid,
-    doors: [],
-    drawers: [],
-    subassemblies,
-    assumptions,
-  };
+  return { kind: result.kind, box, parts, lid, doors, drawers, subassemblies, assumptions };
+}
+
+function doorsOf(parts: readonly EnvelopePart[], piece: Box3): DoorOpening[] {
+  const middle = (piece.min[0] + piece.max[0]) / 2;
+  return touchingGroups(parts.filter((p) => DOOR_ROLES.has(p.role)))
+    .map((leaf) => ({ leaf, box: boxUnion(leaf.map((p) => p.box)) }))
+    .sort((a, b) => a.box.min[0] - b.box.min[0] || b.box.max[2] - a.box.max[2])
+    .map(({ leaf, box }, i) => {
+      const hinge = (box.min[0] + box.max[0]) / 2 <= middle + 1e-6 ? 'left' : 'right';
+      return { id: `door-${i + 1}`, parts: leaf, hinge, hingeXMm: hinge === 'left' ? box.min[0] : box.max[0], hingeYMm: box.min[1], openAngleDeg: DOOR_OPEN_ANGLE_DEG };
+    });
+}
+
+function drawersOf(parts: readonly EnvelopePart[]): DrawerOpening[] {
+  return touchingGroups(parts.filter((p) => DRAWER_ROLES.has(p.role)))
+    .map((drawer) => ({ drawer, box: boxUnion(drawer.map((p) => p.box)) }))
+    .sort((a, b) => b.box.max[2] - a.box.max[2] || a.box.min[0] - b.box.min[0])
+    .map(({ drawer, box }, i) => {
+      const sides = drawer.filter((p) => p.role === 'drawer-side');
+      const travelMm = sides.length > 0 ? Math.max(...sides.map((p) => p.box.max[1] - p.box.min[1])) : box.max[1] - box.min[1];
+      return { id: `drawer-${i + 1}`, parts: drawer, travelMm };
+    });
 }
 
 function placedParts(result: PieceResult): EnvelopePart[] {
