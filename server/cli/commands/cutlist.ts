@@ -13,6 +13,7 @@ import { formatLength } from '../../../shared/units/format.ts';
 import type { LengthUnit } from '../../../shared/units/length.ts';
 import { parseLength } from '../../../shared/units/parse.ts';
 import { choiceOption, printJson, printLines } from '../options.ts';
+import { fromUserCwd } from '../paths.ts';
 import type { RegisterCommand } from './index.ts';
 
 interface CutlistOptions {
@@ -27,7 +28,7 @@ const CLIMATE_KEYS = ['buildMcPercent', 'lowMcPercent', 'highMcPercent'] as cons
 function readSpecFile(path: string): PieceSpec {
   let text: string;
   try {
-    text = readFileSync(path, 'utf8');
+    text = readFileSync(fromUserCwd(path), 'utf8');
   } catch {
     throw new InputError('spec', `cannot read "${path}": give a piece kind (${PIECE_KINDS.join(', ')}) or a spec file`, 'a readable JSON file');
   }

@@ -14,6 +14,7 @@ import { fitToNiche, SIZE_KEYS, type NicheFit, type SizeKey } from '../../../sha
 import { parseRoomSection } from '../../../shared/room/parseRoom.ts';
 import type { RoomSection } from '../../../shared/room/roomSchema.ts';
 import { printJson, printLines } from '../options.ts';
+import { fromUserCwd } from '../paths.ts';
 import { specFromArguments } from './cutlist.ts';
 import type { RegisterCommand } from './index.ts';
 
@@ -28,7 +29,7 @@ interface FitOptions {
 function readRoomFile(path: string): unknown {
   let text: string;
   try {
-    text = readFileSync(path, 'utf8');
+    text = readFileSync(fromUserCwd(path), 'utf8');
   } catch {
     throw new InputError('--room', `cannot read "${path}"`, 'a readable JSON file');
   }

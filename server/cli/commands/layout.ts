@@ -23,6 +23,7 @@ import { parseLength } from '../../../shared/units/parse.ts';
 import { getSheetGood, isSheetGoodId } from '../../../shared/wood/sheetGoods.ts';
 import { getSpecies, isSpeciesId } from '../../../shared/wood/species.ts';
 import { choiceOption, lengthOption, printJson, printLines } from '../options.ts';
+import { fromUserCwd } from '../paths.ts';
 import { specFromArguments } from './cutlist.ts';
 import type { RegisterCommand } from './index.ts';
 
@@ -142,7 +143,7 @@ export const registerLayout: RegisterCommand = (program) => {
         if (specPath !== undefined) throw new InputError('--parts', 'give either a spec or --parts, not both', 'one source of parts');
         let text: string;
         try {
-          text = readFileSync(opts.parts, 'utf8');
+          text = readFileSync(fromUserCwd(opts.parts), 'utf8');
         } catch {
           throw new InputError('--parts', `cannot read "${opts.parts}"`, 'a readable CSV file');
         }

@@ -6,10 +6,9 @@
  * code 2 and no file.
  */
 import { writeFileSync } from 'node:fs';
-import { isAbsolute, resolve } from 'node:path';
 import { buildPlanSet } from '../../../shared/drawing/planSet.ts';
 import type { PaperSize } from '../../../shared/drawing/types.ts';
-import { buildPiece, PIECE_KINDS } from '../../../shared/engine/index.ts';
+import { buildPiece } from '../../../shared/engine/index.ts';
 import { InputError } from '../../../shared/errors.ts';
 import { cutListCsv } from '../../../src/export/cutListCsv.ts';
 import { monoFontsNode } from '../../../src/export/fontsNode.ts';
@@ -17,6 +16,7 @@ import { renderPlanSetPdf } from '../../../src/export/planSetPdf.ts';
 import { specJson } from '../../../src/export/specJson.ts';
 import { SVG_VIEWS, viewSvg } from '../../../src/export/viewSvg.ts';
 import { choiceOption } from '../options.ts';
+import { fromUserCwd } from '../paths.ts';
 import { specFromArguments } from './cutlist.ts';
 import type { RegisterCommand } from './index.ts';
 
@@ -36,11 +36,6 @@ interface PlanOptions {
 
 const FORMATS = ['pdf', 'svg', 'csv', 'json'] as const;
 
-/** A path as the user typed it: `npm run` starts in the package folder, so relative paths are resolved from where it was called. */
-function userPath(path: string): string {
-  const base = process.env.INIT_CWD;
-  return base && !isAbsolute(path) ? resolve(base, path) : path;
-}
 const SHEETS: readonly PaperSize[] = ['letter', 'a4', 'a3'];
 const ORIENTATIONS = ['landscape', 'portrait'] as const;
 
@@ -51,7 +46,7 @@ export async function planOutput(target: string, opts: PlanOptions): Promise<{ d
   const size = choiceOption(opts.sheet, '--sheet', SHEETS, units === 'in' ? 'letter' : 'a4');
   const orientation = choiceOption(opts.orientation, '--orientation', ORIENTATIONS, 'landscape');
   if (opts.date !== undefined && !/^\d{4}-\d{2}-\d{2}$/.test(opts.date)) throw new InputError('--date', `"${opts.date}" is not a date like 2025-03-14`, 'YYYY-MM-DD');
-  const spec = specFromArguments((PIECE_KINDS as readonly string[]).includes(target) ? target : userPath(target), opts.set, units);
+  const spec = specFromArguments(target, opts.set, units);
   const result = buildPiece(spec);
   const title = opts.title ?? `${result.kind[0]!.toUpperCase()}${result.kind.slice(1)}`;
   const info = { title, revision: opts.revision ?? '1', workshopName: opts.workshop ?? '', units, date: opts.date ?? new Date().toISOString().slice(0, 10) };
@@ -91,7 +86,7 @@ export const registerPlan: RegisterCommand = (program) => {
     .action(async (piece: string, opts: PlanOptions) => {
       const { data, format } = await planOutput(piece, opts);
       if (opts.out) {
-        writeFileSync(userPath(opts.out), data);
+        writeFileSync(fromUserCwd(opts.out), data);
         process.stderr.write(`casewright: wrote ${opts.out}\n`);
       } else if (format === 'pdf') {
         throw new InputError('--out', 'a PDF needs a file: give --out plan.pdf', 'a file path');

@@ -1,0 +1,81 @@
+import { copyFileSync, existsSync, mkdirSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join, resolve } from 'node:path';
+import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import { runCli } from '../../../server/cli/main.ts';
+import { fromUserCwd } from '../../../server/cli/paths.ts';
+
+const FIXTURES = resolve('tests/fixtures');
+
+let userDir: string;
+let stdout = '';
+let stderr = '';
+
+beforeEach(() => {
+  // A folder other than the repository, standing for where the user typed `npm run ...`.
+  userDir = mkdtempSync(join(tmpdir(), 'casewright-cwd-'));
+  mkdirSync(join(userDir, 'specs'));
+  copyFileSync(join(FIXTURES, 'specs/chest-toy-maple.json'), join(userDir, 'specs/toy.json'));
+  copyFileSync(join(FIXTURES, 'rooms/coastal-bedroom.json'), join(userDir, 'room.json'));
+  vi.stubEnv('INIT_CWD', userDir);
+  stdout = '';
+  stderr = '';
+  vi.spyOn(process.stdout, 'write').mockImplementation((chunk: string | Uint8Array) => {
+    stdout += String(chunk);
+    return true;
+  });
+  vi.spyOn(process.stderr, 'write').mockImplementation((chunk: string | Uint8Array) => {
+    stderr += String(chunk);
+    return true;
+  });
+});
+
+afterEach(() => {
+  vi.restoreAllMocks();
+  vi.unstubAllEnvs();
+  rmSync(userDir, { recursive: true, force: true });
+});
+
+describe('fromUserCwd', () => {
+  it('reads a relative path from INIT_CWD and leaves an absolute one alone', () => {
+    expect(fromUserCwd('specs/toy.json')).toBe(join(userDir, 'specs/toy.json'));
+    expect(fromUserCwd('/var/x.json')).toBe('/var/x.json');
+  });
+
+  it('falls back to the working folder when npm did not set INIT_CWD', () => {
+    vi.stubEnv('INIT_CWD', undefined);
+    expect(fromUserCwd('a.json')).toBe(join(process.cwd(), 'a.json'));
+  });
+});
+
+describe('casewright commands with relative paths', () => {
+  it('cutlist reads a spec file relative to where the user ran npm', async () => {
+    expect(await runCli(['cutlist', 'specs/toy.json', '--json'])).toBe(0);
+    expect(stderr).toBe('');
+    expect((JSON.parse(stdout) as { piece: { kind: string } }).piece.kind).toBe('chest');
+  });
+
+  it('plan writes --out beside the user, not in the repository', async () => {
+    expect(await runCli(['plan', 'specs/toy.json', '--format', 'csv', '--out', 'toy.csv'])).toBe(0);
+    expect(existsSync(join(userDir, 'toy.csv'))).toBe(true);
+    expect(existsSync(resolve('toy.csv'))).toBe(false);
+    expect(readFileSync(join(userDir, 'toy.csv'), 'utf8')).toContain('Finished length (in)');
+  });
+
+  it('layout reads --parts relative to the user', async () => {
+    writeFileSync(join(userDir, 'parts.csv'), 'name,quantity,length,width,thickness,material\nShelf,2,30in,11in,1/2in,hardwood-plywood-1/2\n');
+    expect(await runCli(['layout', '--parts', 'parts.csv', '--json'])).toBe(0);
+    expect(stderr).toBe('');
+    expect(stdout).toContain('Shelf');
+  });
+
+  it('fit reads the spec and --room relative to the user', async () => {
+    expect(await runCli(['fit', 'specs/toy.json', '--room', 'room.json', '--json'])).toBe(0);
+    expect(stderr).toBe('');
+  });
+
+  it('names the path as typed when the file is missing', async () => {
+    expect(await runCli(['cutlist', 'specs/missing.json'])).toBe(2);
+    expect(stderr).toContain('"specs/missing.json"');
+  });
+});
