@@ -12,6 +12,9 @@ export default defineConfig({
           name: 'unit',
           include: ['tests/unit/**/*.test.ts', 'tests/unit/**/*.test.tsx'],
           environment: 'node',
+          // A guard against hangs, not a speed target: the property tests run thousands of
+          // cases and the CSG tests cut real solids on a 2-core machine.
+          testTimeout: 60_000,
         },
       },
       {
