@@ -1,7 +1,11 @@
 /** The cut list: every part with finished and rough sizes, grouped by material. */
 import type { CutListGroup, CutListRow, Part, PartRole } from '../types.ts';
 
-const ROLE_ORDER: readonly PartRole[] = ['leg', 'rail', 'stile', 'panel', 'lid', 'batten', 'cleat', 'bottom'];
+const ROLE_ORDER: readonly PartRole[] = [
+  'leg', 'rail', 'stile', 'panel', 'lid', 'batten', 'cleat', 'bottom',
+  'top', 'face-frame', 'door-frame', 'door-panel', 'door', 'drawer-front', 'drawer-side', 'drawer-end', 'drawer-bottom', 'runner', 'edge-strip',
+  'case-side', 'case-top', 'case-bottom', 'stretcher', 'divider', 'shelf', 'back', 'base',
+];
 
 /** The material a part is bought as, e.g. `White oak 4/4` or a sheet good's name. */
 export function materialLabel(part: Part): string {

@@ -5,6 +5,7 @@
  * front and back; the bottom and lid come last.
  */
 import type { GlueUpStage, Part, PieceKind } from '../types.ts';
+import { caseGlueUpStages } from './caseGlueUp.ts';
 
 const ids = (parts: readonly Part[], test: (p: Part) => boolean): string[] => parts.filter(test).map((p) => p.id);
 const isSide = (p: Part): boolean => p.id.startsWith('side-') || p.id.startsWith('left-') || p.id.startsWith('right-');
@@ -12,7 +13,7 @@ const isFrontBack = (p: Part): boolean => /^(front|back)(-back)?-/.test(p.id) &&
 
 /** Glue-up stages for a built piece of `kind`. */
 export function glueUpStages(kind: PieceKind, parts: readonly Part[]): GlueUpStage[] {
-  if (kind !== 'chest') return [];
+  if (kind !== 'chest') return caseGlueUpStages(parts);
   const glued = parts.filter((p) => p.glueUp);
   const sideFrame = ids(parts, (p) => isSide(p) && (p.role === 'rail' || p.role === 'stile'));
   const sidePanels = ids(parts, (p) => isSide(p) && p.role === 'panel');

@@ -95,6 +95,14 @@ describe('buildPiece (dresser), worked by hand', () => {
     expect(r.bboxMm[1]).toBeCloseTo(20 * IN + 1 * IN, 6);
   });
 
+  it('glues up in stages: flat work, the carcass, what hangs on it, then the top and fronts', () => {
+    const stages = r.derived.glueUp;
+    expect(stages.map((s) => s.stage)).toEqual([1, 2, 3, 4]);
+    expect(stages[0]!.floatingPartIds).toContain('drawer-bottom');
+    expect(stages[3]!.floatingPartIds).toEqual(['top']);
+    expect(r.derived.cutList.find((g) => g.materialKind === 'sheet')?.rows.length).toBeGreaterThan(0);
+  });
+
   it('cautions that the dresser can tip over, naming ASTM F2057', () => {
     const c = r.checks.find((x) => x.id === 'tip-over');
     expect(c?.severity).toBe('caution');

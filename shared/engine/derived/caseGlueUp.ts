@@ -1,0 +1,58 @@
+/**
+ * Glue-up stages for a carcass piece (dresser, cabinet): flat subassemblies first (boards into
+ * wide parts, the face frame, door frames round their floating panels, drawer boxes), then the
+ * carcass square in one go, then what hangs on it, and last what is screwed on so it can move
+ * or be adjusted (the top, drawer fronts, doors).
+ */
+import type { GlueUpStage, Part, PartRole } from '../types.ts';
+
+const ids = (parts: readonly Part[], roles: readonly PartRole[]): string[] => parts.filter((p) => roles.includes(p.role)).map((p) => p.id);
+
+/** Glue-up stages from the parts of a dresser or cabinet; stages with nothing in them are left out. */
+export function caseGlueUpStages(parts: readonly Part[]): GlueUpStage[] {
+  const glued = parts.filter((p) => p.glueUp);
+  const doorPanels = ids(parts, ['door-panel']);
+  const drawerBottoms = ids(parts, ['drawer-bottom']);
+  const grooveBack = parts.some((p) => p.role === 'back' && p.notes.some((n) => n.includes('Slides into its grooves')));
+  const stages: Omit<GlueUpStage, 'stage'>[] = [
+    {
+      title: 'Wide parts, face frame, door frames and drawer boxes',
+      steps: [
+        ...glued.map((p) => ({ title: `Edge-glue the ${p.name.toLowerCase()} from ${p.glueUp!.boards} boards`, partIds: [p.id], notes: ['Alternate clamps above and below; flatten after the glue cures.'] })),
+        { title: 'Pocket-screw and glue the face frame', partIds: ids(parts, ['face-frame']), notes: ['Glue and screw on a flat surface; check the diagonals.'] },
+        { title: 'Glue each door frame round its panel, the panel dry', partIds: [...ids(parts, ['door-frame']), ...doorPanels], notes: ['Glue only the stub tenons; keep glue out of the panel grooves.', 'Check each door for square and flat.'] },
+        { title: 'Glue the drawer boxes with their bottoms slid in dry', partIds: [...ids(parts, ['drawer-side', 'drawer-end']), ...drawerBottoms], notes: ['Square each box to its bottom, then screw the bottom up into the back.'] },
+        { title: 'Glue the edge strips to the shelves', partIds: ids(parts, ['edge-strip', 'shelf']), notes: ['Flush at the top; plane or scrape after the glue cures.'] },
+      ].filter((s) => s.partIds.length > 0),
+      floatingPartIds: [...doorPanels, ...drawerBottoms],
+    },
+    {
+      title: 'The carcass',
+      steps: [
+        { title: 'Glue the bottom, top or stretchers, dividers and fixed shelves into the sides', partIds: ids(parts, ['case-side', 'case-bottom', 'case-top', 'stretcher', 'divider']), notes: ['Dry-fit first; clamp across every dado; check the diagonals.'] },
+        { title: grooveBack ? 'Slide the back into its grooves' : 'Square the case, then glue and pin the back into its rabbets', partIds: ids(parts, ['back']), notes: ['The back holds the case square: fit it before the glue in the dadoes sets.'] },
+      ].filter((s) => s.partIds.length > 0),
+      floatingPartIds: grooveBack ? ids(parts, ['back']) : [],
+    },
+    {
+      title: 'Face frame, base and runners',
+      steps: [
+        { title: 'Glue the face frame to the carcass', partIds: [...ids(parts, ['face-frame']), ...ids(parts, ['case-side'])], notes: ['Clamp with cauls; the frame may stand proud a hair and be planed flush.'] },
+        { title: 'Build the base and screw the carcass down to it', partIds: ids(parts, ['base']), notes: ['Level the base on the floor first.'] },
+        { title: 'Screw in the drawer runners or slides', partIds: ids(parts, ['runner']), notes: ['Set them level and parallel from a spacer board.'] },
+      ].filter((s) => s.partIds.length > 0),
+      floatingPartIds: [],
+    },
+    {
+      title: 'Top, fronts and doors',
+      steps: [
+        { title: 'Screw the top on through the stretchers: round holes at the front, slots at the back', partIds: ids(parts, ['top', 'stretcher']), notes: ['Screws at the centre of each slot; no glue.'] },
+        { title: 'Screw the drawer fronts to the boxes', partIds: ids(parts, ['drawer-front', 'drawer-end']), notes: ['Set the reveals with spacers before driving the screws.'] },
+        { title: 'Hang the doors', partIds: ids(parts, ['door', 'door-frame']), notes: ['Adjust the hinges for even gaps.'] },
+        { title: 'Drop in the adjustable shelves', partIds: ids(parts, ['shelf']), notes: [] },
+      ].filter((s) => s.partIds.length > 0),
+      floatingPartIds: ids(parts, ['top']).filter(() => parts.some((p) => p.role === 'top' && p.material.kind === 'solid')),
+    },
+  ];
+  return stages.filter((s) => s.steps.length > 0).map((s, i) => ({ stage: i + 1, ...s }));
+}
