@@ -209,8 +209,8 @@ export async function renderPlanSetPdf(model: PlanSetModel, fonts: MonoFonts, on
       }
     }
     onProgress?.(i + 1, total);
-    // Yield so a browser can paint the progress indicator between sheets.
-    await Promise.resolve();
+    // Yield a whole task (not a microtask) so a browser can paint the progress bar between sheets.
+    await new Promise<void>((done) => setTimeout(done, 0));
   }
 
   const count = doc.getNumberOfPages();

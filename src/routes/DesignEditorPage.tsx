@@ -10,6 +10,7 @@ import { useMe } from '../api/useMe.ts';
 import { ApprovalBadge } from '../components/ApprovalBadge.tsx';
 import { CommentsPanel } from '../components/CommentsPanel.tsx';
 import { ErrorNotice } from '../components/ErrorNotice.tsx';
+import { ExportMenu } from '../components/ExportMenu.tsx';
 import { ForkPanel } from '../components/ForkPanel.tsx';
 import { LoadingBlock } from '../components/LoadingBlock.tsx';
 import { ParamForm } from '../components/ParamForm.tsx';
@@ -118,6 +119,8 @@ function Editor({ design, role, workshops, approvals }: { design: DesignData; ro
         </div>
         {result && <p className="dim text-sm text-graphite" aria-label="Overall width, depth and height">{result.bboxMm.map((n) => length(n)).join(' × ')}</p>}
         <ApprovalBadge approval={design.approval} />
+        <ExportMenu result={outcome.ok && typedOutcome.ok ? outcome.result : null} title={design.title} revision={baseRevision} dirty={dirty}
+          workshopName={workshops.find((w) => w.id === design.workshopId)?.name ?? ''} />
         {canEdit && (
           <div className="flex items-center gap-1" role="group" aria-label="Undo and redo">
             <button type="button" className="btn px-2" onClick={undo} disabled={!history?.past.length} title="Undo (Ctrl+Z)" aria-label="Undo">↶</button>
