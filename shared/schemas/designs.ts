@@ -143,7 +143,14 @@ export const designCardSchema = z.object({
 });
 export type DesignCard = z.infer<typeof designCardSchema>;
 
-export const designListResponse = z.object({ designs: z.array(designCardSchema), total: z.number().int() });
+/**
+ * A card in a workshop's listing: the card with its head revision's spec, so the grid can draw
+ * each piece's thumbnail from the listing alone instead of fetching every design's detail.
+ */
+export const designListItemSchema = designCardSchema.extend({ headSpec: pieceSpecSchema });
+export type DesignListItem = z.infer<typeof designListItemSchema>;
+
+export const designListResponse = z.object({ designs: z.array(designListItemSchema), total: z.number().int() });
 
 /** A design with its head revision's spec and the forks made from it. */
 export const designDetailSchema = designCardSchema.extend({

@@ -4,7 +4,7 @@
  * so the editor and the engine get a typed `PieceSpec`. The parameters themselves are the
  * engine's to check (`validateSpec`), which the editor does before every build.
  */
-import { designDetailSchema, revisionSchema, staleSaveDetails } from '../../shared/schemas/designs.ts';
+import { designDetailSchema, designListResponse, revisionSchema, staleSaveDetails } from '../../shared/schemas/designs.ts';
 import type { PieceSpec } from '../../shared/engine/types.ts';
 import type { Climate } from '../../shared/wood/climate.ts';
 
@@ -33,3 +33,10 @@ export type ClientDesignDetail = ReturnType<typeof clientDesignDetail.parse>;
 
 /** The 409 answer's head revision, typed. */
 export const clientStaleSave = staleSaveDetails.transform((d) => ({ head: { ...d.head, spec: toPieceSpec(d.head.spec) } }));
+
+/** A workshop's listing with each card's head spec typed (the grid draws its thumbnails from it). */
+export const clientDesignList = designListResponse.transform((list) => ({
+  ...list,
+  designs: list.designs.map((card) => ({ ...card, headSpec: toPieceSpec(card.headSpec) })),
+}));
+export type ClientDesignListItem = ReturnType<typeof clientDesignList.parse>['designs'][number];

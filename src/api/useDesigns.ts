@@ -1,5 +1,6 @@
 import { keepPreviousData, useQuery } from '@tanstack/react-query';
-import { designListResponse, type PIECE_KINDS } from '../../shared/schemas/designs.ts';
+import type { PIECE_KINDS } from '../../shared/schemas/designs.ts';
+import { clientDesignList } from './pieceSpec.ts';
 import { fetchParsed } from './fetchJson.ts';
 
 /** The filters a workshop's design grid offers. */
@@ -10,7 +11,7 @@ export interface DesignFilters {
   archived?: 'true' | 'false' | 'all';
 }
 
-/** A workshop's designs as cards, filtered on the server. */
+/** A workshop's designs as cards, filtered on the server; each card carries its head spec for the drawing. */
 export function useDesigns(workshopId: string | undefined, filters: DesignFilters) {
   return useQuery({
     queryKey: ['designs', 'list', workshopId, filters],
@@ -19,7 +20,7 @@ export function useDesigns(workshopId: string | undefined, filters: DesignFilter
     queryFn: () => {
       const query = new URLSearchParams();
       for (const [key, value] of Object.entries(filters)) if (value) query.set(key, value);
-      return fetchParsed(designListResponse, `/api/workshops/${workshopId}/designs?${query}`);
+      return fetchParsed(clientDesignList, `/api/workshops/${workshopId}/designs?${query}`);
     },
   });
 }

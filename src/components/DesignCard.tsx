@@ -1,6 +1,5 @@
 import { Link } from 'react-router-dom';
-import type { DesignCard as Card } from '../../shared/schemas/designs.ts';
-import { useDesign } from '../api/useDesign.ts';
+import type { ClientDesignListItem } from '../api/pieceSpec.ts';
 import { buildOutcome } from '../editor/pieceBuild.ts';
 import { timeAgo } from '../editor/timeAgo.ts';
 import { useLength } from '../state/useLength.ts';
@@ -9,22 +8,14 @@ import { ApprovalBadge } from './ApprovalBadge.tsx';
 import { DesignThumbnail } from './DesignThumbnail.tsx';
 
 /** One design in the workshop grid: its drawing, size, last change, approval and origin. */
-export function DesignCard({ card }: { card: Card }) {
-  const detail = useDesign(card.id);
+export function DesignCard({ card }: { card: ClientDesignListItem }) {
   const length = useLength();
-  const spec = detail.data?.headRevision.spec;
-  const outcome = spec ? buildOutcome(spec) : null;
-  const size = outcome?.ok ? outcome.result.bboxMm.map((n) => length(n)).join(' × ') : null;
+  const outcome = buildOutcome(card.headSpec);
+  const size = outcome.ok ? outcome.result.bboxMm.map((n) => length(n)).join(' × ') : null;
   return (
     <li className="card group relative flex flex-col overflow-hidden transition-shadow focus-within:shadow-md hover:shadow-md">
       <div className="relative aspect-[4/3] border-b border-rule bg-paper/60 p-3">
-        {spec ? (
-          <DesignThumbnail spec={spec} title={card.title} />
-        ) : detail.isError ? (
-          <p className="text-xs text-pencil">Drawing unavailable: {detail.error.message}</p>
-        ) : (
-          <div className="h-full w-full animate-pulse rounded-sm bg-paper-deep/60" aria-label="Loading drawing" />
-        )}
+        <DesignThumbnail spec={card.headSpec} title={card.title} />
         <span className="absolute left-2 top-2 rounded-sm bg-sheet/90 px-1.5 py-0.5 font-mono text-[10px] uppercase tracking-widest text-graphite-soft">{card.kind}</span>
         {card.archived && <span className="absolute right-2 top-2 rounded-sm bg-graphite px-1.5 py-0.5 text-[10px] uppercase tracking-widest text-sheet">Archived</span>}
       </div>

@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { chestSpec, invitationTokens, startApi, type Api } from './support/api.ts';
 import { makeDesign, makeShop, type Shop } from './support/world.ts';
+import { designListResponse } from '../../shared/schemas/designs.ts';
 
 let api: Api;
 let shop: Shop;
@@ -100,6 +101,19 @@ describe('reading, comparing and restoring', () => {
     const bad = await other.reviewer.get(`${base}?kind=sofa`);
     expect(bad.status).toBe(400);
     expect(bad.body.error.details[0].path).toBe('kind');
+  });
+
+  it('lists each design with its head revision\'s spec, so a card draws the piece without a second request', async () => {
+    const other = await makeShop(api.app, 'designs-list-spec', invitationTokens(api.mailbox));
+    const id = await makeDesign(other.designer, other.workshopId, 'Listed with its spec', 1000);
+    expect((await other.designer.post(`/api/designs/${id}/revisions`, { baseRevision: 1, spec: chestSpec({ width: 1111 }), message: 'wider' })).status).toBe(201);
+    const res = await other.reviewer.get(`/api/workshops/${other.workshopId}/designs`);
+    expect(res.status).toBe(200);
+    const item = res.body.designs.find((d: { id: string }) => d.id === id);
+    // The head (revision 2), not the first revision: the card shows the design as it stands.
+    expect(item.head.number).toBe(2);
+    expect(item.headSpec).toEqual(chestSpec({ width: 1111 }));
+    expect(designListResponse.safeParse(res.body).success).toBe(true);
   });
 
   it('refuses to save an archived design until it is unarchived (409)', async () => {

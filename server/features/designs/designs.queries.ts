@@ -14,7 +14,7 @@ export const CARD_SELECT = `
     CASE WHEN om.user_id IS NULL THEN NULL ELSE o.workshop_id END AS "originWorkshopId",
     (SELECT count(*) FROM designs f WHERE f.origin_design_id = d.id) AS "forkCount",
     r.number AS "headNumber", r.message AS "headMessage", r.engine_version AS "headEngineVersion",
-    r.summary AS "headSummary", r.restored_from AS "headRestoredFrom", r.created_at AS "headCreatedAt",
+    r.summary AS "headSummary", r.spec AS "headSpec", r.restored_from AS "headRestoredFrom", r.created_at AS "headCreatedAt",
     r.author_id AS "headAuthorId", au.name AS "headAuthorName", au.email AS "headAuthorEmail",
     la.revision_number AS "latestRevision", la.decision AS "latestDecision", la.created_at AS "latestAt",
     la.reviewer_id AS "latestReviewerId", la.reviewer_name AS "latestReviewerName", la.reviewer_email AS "latestReviewerEmail",
@@ -35,7 +35,7 @@ export interface CardRow {
   createdAt: Date; updatedAt: Date; approvedRevision: number | null;
   originDesignId: string | null; originRevision: number | null; originTitle: string | null; originWorkshopId: string | null;
   forkCount: number | string;
-  headNumber: number; headMessage: string; headEngineVersion: string; headSummary: Record<string, unknown>;
+  headNumber: number; headMessage: string; headEngineVersion: string; headSummary: Record<string, unknown>; headSpec: unknown;
   headRestoredFrom: number | null; headCreatedAt: Date;
   headAuthorId: string | null; headAuthorName: string | null; headAuthorEmail: string | null;
   latestRevision: number | null; latestDecision: 'approved' | 'changes_requested' | null; latestAt: Date | null;

@@ -6,7 +6,7 @@
 import { QueryTypes, type Sequelize, type Transaction } from 'sequelize';
 import { can } from '../../../shared/permissions.ts';
 import type { PieceSpec } from '../../../shared/engine/types.ts';
-import type { CompareResponse, DesignCard, DesignDetail, DesignListQuery, Revision, RevisionInfo } from '../../../shared/schemas/designs.ts';
+import type { CompareResponse, DesignCard, DesignDetail, DesignListItem, DesignListQuery, Revision, RevisionInfo } from '../../../shared/schemas/designs.ts';
 import { isInputError } from '../../../shared/errors.ts';
 import type { Models } from '../../db/models/index.ts';
 import { HttpError, badRequest, conflict, forbidden, notFound } from '../../http/HttpError.ts';
@@ -77,7 +77,8 @@ export function createDesignService(sequelize: Sequelize, models: Models) {
     card,
     revision,
 
-    async list(workshopId: string, viewerId: string, query: DesignListQuery): Promise<{ designs: DesignCard[]; total: number }> {
+    /** A page of a workshop's designs as cards, each with its head spec so a grid draws every piece from one request. */
+    async list(workshopId: string, viewerId: string, query: DesignListQuery): Promise<{ designs: DesignListItem[]; total: number }> {
       const where = ['d.workshop_id = :workshopId'];
       if (query.kind) where.push('d.kind = :kind');
       if (query.q) where.push(`d.title ILIKE :q ESCAPE '\\'`);
@@ -96,7 +97,7 @@ export function createDesignService(sequelize: Sequelize, models: Models) {
           },
         },
       );
-      return { designs: rows.map(toCard), total: Number(rows[0]?.total ?? 0) };
+      return { designs: rows.map((row) => ({ ...toCard(row), headSpec: row.headSpec as PieceSpec })), total: Number(rows[0]?.total ?? 0) };
     },
 
     /** A design with its head revision's spec, and the forks made from it that the viewer may see. */
