@@ -73,9 +73,9 @@ async function load(name: string, seconds: number, options: Omit<autocannon.Opti
   instance.on('response', (_client: unknown, _status: number, _bytes: number, responseTime: number) => latencies.push(responseTime));
   const result = await instance;
   latencies.sort((a, b) => a - b);
-  const errors = result.errors + result.timeouts + result.non2xx;
+  const errors = result.errors + result.non2xx;
   const fmt = (ms: number) => `${ms.toFixed(1)} ms`.padStart(9);
-  return `  ${name.padEnd(30)} ${result.requests.average.toFixed(0).padStart(6)} req/s  p50 ${fmt(percentile(latencies, 50))}  p95 ${fmt(percentile(latencies, 95))}  p99 ${fmt(percentile(latencies, 99))}  requests ${String(result.requests.total).padStart(6)}  errors ${errors}`;
+  return `  ${name.padEnd(30)} ${result.requests.average.toFixed(0).padStart(6)} req/s  p50 ${fmt(percentile(latencies, 50))}  p95 ${fmt(percentile(latencies, 95))}  p99 ${fmt(percentile(latencies, 99))}  requests ${String(result.requests.total).padStart(6)}  errors ${errors} (non-2xx ${result.non2xx}, timeouts ${result.timeouts})`;
 }
 
 /**
