@@ -1,20 +1,26 @@
 import { useState, type FormEvent } from 'react';
 import { useNavigate } from 'react-router-dom';
-import { can } from '../../shared/permissions.ts';
+import { can, type Role } from '../../shared/permissions.ts';
 import type { MeResponse } from '../../shared/schemas/auth.ts';
 import { titleSchema } from '../../shared/schemas/designs.ts';
 import { useForkDesign } from '../api/useForkDesign.ts';
 import { linkTo } from '../routes/paths.ts';
 import { ErrorNotice } from './ErrorNotice.tsx';
+import { RoleRefusal } from './RoleRefusal.tsx';
 
-/** Fork a revision into a workshop where the user may create designs; the original stays as it is. */
-export function ForkPanel({ designId, title, revision, workshops }: { designId: string; title: string; revision: number; workshops: MeResponse['workshops'] }) {
+/**
+ * Fork a revision into a workshop where the user may create designs; the original stays as it is.
+ * Forking needs `design.fork` in the design's own workshop (`role`) as well: a reviewer there is
+ * told so rather than shown a form the API would refuse.
+ */
+export function ForkPanel({ designId, title, revision, workshops, role }: { designId: string; title: string; revision: number; workshops: MeResponse['workshops']; role: Role | null }) {
   const targets = workshops.filter((w) => can(w.role, 'design.create'));
   const [workshopId, setWorkshopId] = useState(targets[0]?.id ?? '');
   const [name, setName] = useState(`${title} (variation)`);
   const [error, setError] = useState<string | null>(null);
   const fork = useForkDesign(designId);
   const navigate = useNavigate();
+  if (!can(role, 'design.fork')) return <RoleRefusal compact role={role} action="design.fork" doing="fork this design" />;
   if (targets.length === 0) return <p className="px-3 py-4 text-sm text-graphite-soft">You cannot create designs in any of your workshops, so you cannot fork here.</p>;
   const submit = (event: FormEvent) => {
     event.preventDefault();

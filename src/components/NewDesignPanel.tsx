@@ -27,11 +27,20 @@ function buildableKinds(): { kind: PieceKind; ok: boolean }[] {
 }
 
 /** Start a design from a kind's defaults, or as a variation (a fork) of one already in the workshop. */
-export function NewDesignPanel({ workshopId, designs, onClose }: { workshopId: string; designs: readonly DesignCard[]; onClose: () => void }) {
+export function NewDesignPanel({ workshopId, designs, onClose, initialKind, initialSourceId }: {
+  workshopId: string;
+  designs: readonly DesignCard[];
+  onClose: () => void;
+  /** The kind chosen at first (when the engine builds it). */
+  initialKind?: PieceKind;
+  /** Start as a variation of this design (when it is in the list). */
+  initialSourceId?: string;
+}) {
   const kinds = useMemo(buildableKinds, []);
-  const [from, setFrom] = useState<'kind' | 'design'>('kind');
-  const [kind, setKind] = useState<PieceKind>(kinds.find((k) => k.ok)?.kind ?? 'chest');
-  const [sourceId, setSourceId] = useState(designs[0]?.id ?? '');
+  const startSource = designs.find((d) => d.id === initialSourceId)?.id;
+  const [from, setFrom] = useState<'kind' | 'design'>(startSource ? 'design' : 'kind');
+  const [kind, setKind] = useState<PieceKind>(kinds.find((k) => k.ok && k.kind === initialKind)?.kind ?? kinds.find((k) => k.ok)?.kind ?? 'chest');
+  const [sourceId, setSourceId] = useState(startSource ?? designs[0]?.id ?? '');
   const [title, setTitle] = useState('');
   const [error, setError] = useState<string | null>(null);
   const create = useCreateDesign(workshopId);

@@ -49,7 +49,7 @@ export function RevisionHistory({ designId, headNumber, canEdit, dirty, approval
                   <p className="flex flex-wrap items-baseline gap-x-2">
                     <span className="font-mono font-semibold">r{rev.number}</span>
                     {rev.number === headNumber && <span className="text-[11px] uppercase tracking-wider text-pencil">latest</span>}
-                    {rev.number === baseRevision && <span className="text-[11px] uppercase tracking-wider text-graphite-soft">editing</span>}
+                    {rev.number === baseRevision && <span className="text-[11px] uppercase tracking-wider text-graphite-soft">{canEdit ? 'editing' : 'showing'}</span>}
                     {approval && (
                       <span className={`text-[11px] font-medium ${approval.decision === 'approved' ? 'text-ok' : 'text-caution'}`}>
                         {approval.decision === 'approved' ? '✓ approved' : 'changes requested'}

@@ -1,5 +1,5 @@
 import { useEffect, useState } from 'react';
-import { Navigate, useParams } from 'react-router-dom';
+import { Link, Navigate, useParams } from 'react-router-dom';
 import { PIECE_KINDS } from '../../shared/schemas/designs.ts';
 import { can } from '../../shared/permissions.ts';
 import { useDesigns, type DesignFilters } from '../api/useDesigns.ts';
@@ -8,10 +8,9 @@ import { useMembers } from '../api/useMembers.ts';
 import { DesignCard } from '../components/DesignCard.tsx';
 import { ErrorNotice } from '../components/ErrorNotice.tsx';
 import { LoadingBlock } from '../components/LoadingBlock.tsx';
-import { NewDesignPanel } from '../components/NewDesignPanel.tsx';
 import { WorkshopSwitcher } from '../components/WorkshopSwitcher.tsx';
 import { usePreferences } from '../state/usePreferences.ts';
-import { paths } from './paths.ts';
+import { linkTo, paths } from './paths.ts';
 
 /** A workshop's designs as a grid of cards, with search, filters and "new design". */
 export function WorkshopPage() {
@@ -21,7 +20,6 @@ export function WorkshopPage() {
   const setLastWorkshop = usePreferences((s) => s.setLastWorkshop);
   const [search, setSearch] = useState('');
   const [filters, setFilters] = useState<DesignFilters>({ archived: 'false' });
-  const [creating, setCreating] = useState(false);
   const members = useMembers(workshop ? workshopId : undefined);
   const designs = useDesigns(workshop ? workshopId : undefined, { ...filters, q: search.trim() || undefined });
 
@@ -43,15 +41,13 @@ export function WorkshopPage() {
         </div>
         <div className="flex flex-wrap items-center gap-3">
           <WorkshopSwitcher workshops={me.data.workshops} currentId={workshop.id} />
-          {canCreate && !creating && (
-            <button type="button" className="btn btn-primary" onClick={() => setCreating(true)}>
+          {canCreate && (
+            <Link to={linkTo.newDesign(workshop.id)} className="btn btn-primary">
               New design
-            </button>
+            </Link>
           )}
         </div>
       </div>
-
-      {creating && <NewDesignPanel workshopId={workshop.id} designs={list} onClose={() => setCreating(false)} />}
 
       <form role="search" className="my-4 flex flex-wrap items-end gap-3" onSubmit={(e) => e.preventDefault()}>
         <div className="min-w-[14rem] flex-1">
@@ -73,7 +69,7 @@ export function WorkshopPage() {
       ) : designs.isError ? (
         <ErrorNotice title="Could not load the designs" error={designs.error} onRetry={() => void designs.refetch()} />
       ) : list.length === 0 ? (
-        <EmptyGrid filtered={Boolean(search || filters.kind || filters.authorId || filters.archived !== 'false')} canCreate={canCreate} onCreate={() => setCreating(true)} />
+        <EmptyGrid filtered={Boolean(search || filters.kind || filters.authorId || filters.archived !== 'false')} newDesignLink={canCreate ? linkTo.newDesign(workshop.id) : null} />
       ) : (
         <>
           <p className="mb-3 text-xs text-graphite-soft" aria-live="polite">
@@ -109,17 +105,17 @@ function Filter({ label, value, onChange, options }: { label: string; value: str
   );
 }
 
-function EmptyGrid({ filtered, canCreate, onCreate }: { filtered: boolean; canCreate: boolean; onCreate: () => void }) {
+function EmptyGrid({ filtered, newDesignLink }: { filtered: boolean; newDesignLink: string | null }) {
   return (
     <div className="rounded-sm border border-dashed border-rule px-6 py-14 text-center">
       <p className="font-semibold">{filtered ? 'No design matches these filters.' : 'No designs in this workshop yet.'}</p>
       <p className="mt-1 text-sm text-graphite-soft">
-        {filtered ? 'Clear the search or choose other filters.' : canCreate ? 'Start one from a chest, dresser or cabinet with sensible defaults.' : 'A designer of this workshop will add them.'}
+        {filtered ? 'Clear the search or choose other filters.' : newDesignLink ? 'Start one from a chest, dresser or cabinet with sensible defaults.' : 'A designer of this workshop will add them.'}
       </p>
-      {!filtered && canCreate && (
-        <button type="button" className="btn btn-primary mt-4" onClick={onCreate}>
+      {!filtered && newDesignLink && (
+        <Link to={newDesignLink} className="btn btn-primary mt-4">
           New design
-        </button>
+        </Link>
       )}
     </div>
   );

@@ -6,6 +6,7 @@ export const paths = {
   resetPassword: '/reset-password',
   workshops: '/workshops',
   workshop: '/workshops/:workshopId',
+  newDesign: '/workshops/:workshopId/new',
   design: '/designs/:designId',
   compare: '/designs/:designId/compare',
 } as const;
@@ -15,6 +16,7 @@ export type PathName = keyof typeof paths;
 /** Concrete addresses for the paths that take parameters. */
 export const linkTo = {
   workshop: (workshopId: string) => `/workshops/${encodeURIComponent(workshopId)}`,
+  newDesign: (workshopId: string, kind?: string) => `/workshops/${encodeURIComponent(workshopId)}/new${kind ? `?kind=${encodeURIComponent(kind)}` : ''}`,
   design: (designId: string) => `/designs/${encodeURIComponent(designId)}`,
   compare: (designId: string, from: number, to: number) =>
     `/designs/${encodeURIComponent(designId)}/compare?from=${from}&to=${to}`,

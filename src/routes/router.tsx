@@ -22,6 +22,7 @@ export const router = createBrowserRouter([
         children: [
           { path: paths.workshops, lazy: async () => ({ Component: (await import('./WorkshopsIndexPage.tsx')).WorkshopsIndexPage }) },
           { path: paths.workshop, lazy: async () => ({ Component: (await import('./WorkshopPage.tsx')).WorkshopPage }) },
+          { path: paths.newDesign, lazy: async () => ({ Component: (await import('./NewDesignPage.tsx')).NewDesignPage }) },
           { path: paths.design, lazy: async () => ({ Component: (await import('./DesignEditorPage.tsx')).DesignEditorPage }) },
           { path: paths.compare, lazy: async () => ({ Component: (await import('./ComparePage.tsx')).ComparePage }) },
         ],

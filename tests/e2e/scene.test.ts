@@ -114,7 +114,7 @@ describe('the 3D view in the design editor', { timeout: 300_000 }, () => {
     await page.getByRole('button', { name: 'Create account' }).click();
     await page.getByLabel('Workshop name').fill('Tamura Woodshop');
     await page.getByRole('button', { name: 'Start the workshop' }).click();
-    await page.getByRole('button', { name: 'New design' }).first().click();
+    await page.getByRole('link', { name: 'New design' }).first().click();
     await page.getByLabel('Title of the new design').fill('Blanket chest for the 3D view');
     await page.getByRole('button', { name: 'Create and open' }).click();
     await page.waitForURL(/\/designs\/[0-9a-f-]{36}$/);
