@@ -179,7 +179,7 @@ function Editor({ design, role, workshops, approvals }: { design: DesignData; ro
           <TabPanel idPrefix="side" tabKey={side} className="flex min-h-0 flex-1 flex-col">
             {side === 'history' && <RevisionHistory designId={design.id} headNumber={design.head.number} canEdit={canEdit} dirty={dirty} approvals={approvals} />}
             {side === 'comments' && <CommentsPanel designId={design.id} revision={baseRevision} parts={result?.parts ?? []} canComment={can(role, 'comment.create')} />}
-            {side === 'fork' && <ForkPanel designId={design.id} title={design.title} revision={baseRevision} workshops={workshops} />}
+            {side === 'fork' && <ForkPanel designId={design.id} title={design.title} revision={baseRevision} workshops={workshops} role={role} />}
           </TabPanel>
         </aside>
       </div>
