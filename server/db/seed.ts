@@ -100,8 +100,8 @@ export async function seedDemo(sequelize: Sequelize): Promise<boolean> {
 
   // The other demo pieces need the engine to build their kind; skipped until it does.
   const others: { title: string; kind: PieceKind; changes: Record<string, unknown>; message: string }[] = [
-    { title: 'Six-drawer dresser, cherry', kind: 'dresser', changes: { species: 'black-cherry' }, message: 'Six drawers in cherry, first layout' },
-    { title: 'Mudroom cabinet, painted maple', kind: 'cabinet', changes: { species: 'soft-maple' }, message: 'Painted maple cabinet for the mudroom, first layout' },
+    { title: 'Six-drawer dresser, cherry', kind: 'dresser', changes: { species: 'black-cherry', drawerRows: 3, drawerColumns: 2, finish: 'clear' }, message: 'Six drawers in cherry, first layout' },
+    { title: 'Mudroom cabinet, painted maple', kind: 'cabinet', changes: { species: 'soft-maple', finish: 'paint' }, message: 'Painted maple cabinet for the mudroom, first layout' },
   ];
   for (const piece of others) {
     if (await existing(piece.title)) continue;

@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { readFileSync } from 'node:fs';
 import { DEMO_WORKSHOP, seedDemo } from '../../server/db/seed.ts';
+import { buildPiece, defaultSpec } from '../../shared/engine/index.ts';
 import { Client, startApi, type Api } from './support/api.ts';
 
 const demo = JSON.parse(readFileSync(new URL('../../server/db/demo-accounts.json', import.meta.url), 'utf8')) as {
@@ -47,6 +48,20 @@ describe('seedDemo', () => {
     expect(detail.body.forks[0].fromRevision).toBe(2);
     const comments = await reviewer.get(`/api/designs/${chest.id}/comments?partId=lid`);
     expect(comments.body.comments.length).toBeGreaterThanOrEqual(1);
+  });
+
+  it('seeds a cherry dresser and a painted maple cabinet for each kind the engine builds', async () => {
+    const [rows] = await api.sequelize.query(`SELECT kind, title FROM designs d JOIN workshops w ON w.id = d.workshop_id WHERE w.name = :name`, { replacements: { name: DEMO_WORKSHOP } });
+    const kinds = new Set((rows as { kind: string }[]).map((r) => r.kind));
+    for (const kind of ['dresser', 'cabinet'] as const) {
+      let builds = true;
+      try {
+        buildPiece(defaultSpec(kind));
+      } catch {
+        builds = false;
+      }
+      expect(kinds.has(kind)).toBe(builds);
+    }
   });
 
   it('changes nothing when run again', async () => {
