@@ -9,6 +9,7 @@ import type { ParamValue, PieceSpec } from '../types.ts';
 import { tipOverCheck } from '../checks/tipOver.ts';
 import { buildCase, type CaseBuild } from './caseBuild.ts';
 import { caseLayout, type CasePlan } from './caseLayout.ts';
+import { buildFramedDresser, framedLayout, type FramedParams } from './dresserFramed.ts';
 import { MAX_DRAWER_ROWS, type DresserParams } from './dresserParams.ts';
 
 /** The carcass-piece plan a dresser's parameters describe. */
@@ -39,11 +40,21 @@ export function dresserPlan(params: Readonly<Record<string, ParamValue>>, climat
 
 /** Throws an InputError for the first combination of dresser parameters that cannot be built. */
 export function validateDresserCombinations(params: Readonly<Record<string, ParamValue>>, climate: Climate = DEFAULT_CLIMATE): void {
-  caseLayout(dresserPlan(params, climate));
+  const plan = dresserPlan(params, climate);
+  if (isFramed(plan)) framedLayout(...framedArgs(plan));
+  else caseLayout(plan);
+}
+
+const isFramed = (plan: CasePlan): boolean => (plan.p as DresserParams).caseConstruction === 'frame-and-panel';
+
+function framedArgs(plan: CasePlan): Parameters<typeof framedLayout> {
+  const d = plan.contents.kind === 'drawers' ? plan.contents.drawers : null;
+  return [plan.p as DresserParams & FramedParams, plan.top!, d!, plan.rows, plan.columns, plan.rowHeights, plan.rowField, plan.climate];
 }
 
 /** Builds a dresser from a spec already checked by `validateSpec`. */
 export function buildDresser(spec: PieceSpec): CaseBuild {
   const plan = dresserPlan(spec.params as Record<string, ParamValue>, spec.climate ?? DEFAULT_CLIMATE);
+  if (isFramed(plan)) return buildFramedDresser(...framedArgs(plan));
   return buildCase(plan, { pieceChecks: (ids) => [tipOverCheck(ids.filter((id) => id.includes('side') || id === 'top'), 'dresser', plan.p.height, plan.p.depth)] });
 }

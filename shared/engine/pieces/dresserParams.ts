@@ -7,6 +7,7 @@
  * row down.
  */
 import type { ParamDef } from '../paramDef.ts';
+import { CHEST_PARAMS } from './chestParams.ts';
 import { BASE_PARAMS, CARCASS_PARAMS, FACE_FRAME_PARAMS, FRONT_PARAMS, GROUPS, IN, MILLING_PARAMS, sheetChoice, WOOD_PARAMS, type CaseParams } from './caseParams.ts';
 
 /** Most rows of drawers a dresser takes. */
@@ -17,11 +18,18 @@ const rowHeights: ParamDef[] = Array.from({ length: MAX_DRAWER_ROWS }, (_, i) =>
   default: (5 + i) * IN, min: 25, max: 1000, help: 'Used when the heights are listed: each row\'s opening, top first; the bottom row takes what is left.',
 }));
 
+const FRAMED = 'Frame-and-panel case';
+/** The chest's own frame-and-panel parameters, for a dresser built like the chest. */
+const FRAMED_KEYS = ['legSize', 'footHeight', 'stockThickness', 'topRailWidth', 'bottomRailWidth', 'sideStileCount', 'stileWidth', 'grooveWidth', 'legGrooveDepth', 'frameGrooveDepth', 'railTongueLength', 'tongueClearance', 'legGrooveStop', 'panelMaterial', 'panelSheet', 'panelThickness', 'panelGrain'];
+const framedParams: ParamDef[] = FRAMED_KEYS.map((key) => ({ ...CHEST_PARAMS.find((d) => d.key === key)!, group: FRAMED }));
+
 /** Every dresser parameter, in form order. */
 export const DRESSER_PARAMS: readonly ParamDef[] = [
   { key: 'width', label: 'Width', group: GROUPS.size, kind: 'length', default: 56 * IN, min: 400, max: 2400, help: 'Outside width of the carcass; the top\'s overhangs add to it.' },
   { key: 'depth', label: 'Depth', group: GROUPS.size, kind: 'length', default: 20 * IN, min: 250, max: 900, help: 'From the back to the face of the face frame (or the carcass edges); overlay fronts and the top\'s overhang stand in front of it.' },
   { key: 'height', label: 'Height to the top', group: GROUPS.size, kind: 'length', default: 34 * IN, min: 400, max: 2200, help: 'From the floor to the top surface.' },
+
+  { key: 'caseConstruction', label: 'Case', group: GROUPS.size, kind: 'enum', default: 'carcass', options: [{ value: 'carcass', label: 'Plywood carcass (face frame or frameless)' }, { value: 'frame-and-panel', label: 'Frame-and-panel sides on corner legs, web frames (like the chest)' }], help: 'A frame-and-panel case carries its drawers on wooden runners.' },
 
   { key: 'drawerRows', label: 'Rows of drawers', group: GROUPS.drawers, kind: 'number', default: 3, min: 1, max: MAX_DRAWER_ROWS, integer: true },
   { key: 'drawerColumns', label: 'Drawers in each row', group: GROUPS.drawers, kind: 'number', default: 2, min: 1, max: 4, integer: true, help: 'More than one: dividers separate the columns.' },
@@ -50,6 +58,10 @@ export const DRESSER_PARAMS: readonly ParamDef[] = [
   { key: 'topBoardWidth', label: 'Top board width', group: GROUPS.top, kind: 'length', default: 6 * IN, min: 50, max: 300 },
   { key: 'stretcherWidth', label: 'Stretcher width', group: GROUPS.top, kind: 'length', default: 3 * IN, min: 40, max: 200, help: 'Front and back stretchers the top is screwed to.' },
 
+  ...framedParams,
+  { key: 'webFrameRailDepth', label: 'Web-frame rail depth', group: FRAMED, kind: 'length', default: 3 * IN, min: 25, max: 200, help: 'Front to back size of the web frames\' front and back rails; deeper than the legs.' },
+  { key: 'runnerWidth', label: 'Side runner width', group: FRAMED, kind: 'length', default: 1.5 * IN, min: 15, max: 100 },
+
   ...CARCASS_PARAMS,
   ...FACE_FRAME_PARAMS,
   ...FRONT_PARAMS,
@@ -60,6 +72,7 @@ export const DRESSER_PARAMS: readonly ParamDef[] = [
 
 /** The dresser's parameters, typed. */
 export interface DresserParams extends CaseParams {
+  caseConstruction: 'carcass' | 'frame-and-panel';
   drawerRows: number; drawerColumns: number;
   slideType: 'side-mount' | 'undermount' | 'wood-runners'; drawerJoinery: 'rabbet-and-dado' | 'rabbet';
   drawerSideThickness: number; drawerSpecies: CaseParams['species']; drawerBottomSheet: CaseParams['backSheet'];

@@ -174,3 +174,45 @@ describe('buildPiece (dresser) options', () => {
     }
   });
 });
+
+describe('buildPiece (dresser) built like the chest', () => {
+  // Frame-and-panel case: the chest's legs (1-3/4 in), 3/4 in rails 3 in (top) and 4 in
+  // (bottom) wide, 1/2 in leg grooves, 7/16 in rail tongues, a 3 in foot; 3/4 in web frames with
+  // 3 in rails; inset fronts 1/16 in reveal; wooden runners.
+  const r = dresser({ caseConstruction: 'frame-and-panel', slideType: 'wood-runners', frontMount: 'inset' });
+
+  it('runs the legs from the floor to the underside of the top', () => {
+    // 34 − 7/8 = 33-1/8 in = 841.375 mm
+    within(part(r, 'front-left-leg').lengthMm, 841.375);
+  });
+
+  it('makes the sides with the chest\'s frame-and-panel face: rails the span plus a tongue each end', () => {
+    // 20 − 2 × 1-3/4 + 2 × 7/16 = 17-3/8 in = 441.325 mm, as the chest's side rails are worked.
+    within(part(r, 'side-top-rail').lengthMm, 441.325);
+    expect(part(r, 'side-panel').quantity).toBe(2);
+  });
+
+  it('tenons the web-frame rails into the legs and shares the height among the rows', () => {
+    // 56 − 3-1/2 + 7/8 = 53-3/8 in = 1355.725 mm.
+    within(part(r, 'web-frame-front-rail').lengthMm, 1355.725);
+    // Rows share 841.375 − 76.2 foot − 4 × 19.05 frames = 688.975; h0 = (688.975 − 76.2) / 3 = 204.258.
+    within(part(r, 'mullion').lengthMm, 204.258);
+    // Inset front: 204.258 − 2 × 1.5875 = 201.083 tall.
+    within(part(r, 'row-1-drawer-front').widthMm, 201.083);
+  });
+
+  it('has no errors, and every leg carries a mortise for each web frame', () => {
+    expect(r.checks.filter((c) => c.severity === 'error')).toEqual([]);
+    expect(part(r, 'front-left-leg').features.filter((f) => f.type === 'mortise')).toHaveLength(4);
+  });
+
+  it('refuses slides other than wooden runners, naming slideType', () => {
+    try {
+      dresser({ caseConstruction: 'frame-and-panel', slideType: 'side-mount' });
+      expect.unreachable();
+    } catch (error) {
+      expect(isInputError(error)).toBe(true);
+      expect((error as { field: string }).field).toBe('slideType');
+    }
+  });
+});
