@@ -1,11 +1,9 @@
 import { useState, type FormEvent } from 'react';
-import { useNavigate } from 'react-router-dom';
 import type { PieceSpec } from '../../shared/engine/types.ts';
 import { StaleSaveError, useSaveRevision } from '../api/useSaveRevision.ts';
-import { useForkWithSpec } from '../api/useForkWithSpec.ts';
-import { linkTo } from '../routes/paths.ts';
 import { useEditorStore } from '../state/useEditorStore.ts';
 import { ErrorNotice } from './ErrorNotice.tsx';
+import { SaveConflictDialog } from './SaveConflictDialog.tsx';
 
 interface Props {
   designId: string;
@@ -23,10 +21,8 @@ interface Props {
 export function SaveBar({ designId, workshopId, title, spec, dirty, buildable }: Props) {
   const [message, setMessage] = useState('');
   const save = useSaveRevision(designId);
-  const forkMine = useForkWithSpec(designId);
   const baseRevision = useEditorStore((s) => s.baseRevision);
-  const { markSaved, load } = useEditorStore.getState();
-  const navigate = useNavigate();
+  const { markSaved } = useEditorStore.getState();
   const conflict = save.error instanceof StaleSaveError ? save.error : null;
 
   const submit = (event: FormEvent) => {
@@ -50,27 +46,7 @@ export function SaveBar({ designId, workshopId, title, spec, dirty, buildable }:
         </button>
       </form>
       {conflict && (
-        <div role="alertdialog" aria-labelledby="conflict-title" className="absolute right-4 z-30 mt-2 w-[26rem] rounded-sm border-2 border-pencil bg-sheet p-4 shadow-lg">
-          <p id="conflict-title" className="font-semibold text-pencil">Someone saved a newer revision</p>
-          <p className="mt-1 text-sm">
-            Revision {conflict.head.number}
-            {conflict.head.author ? ` by ${conflict.head.author.name}` : ''}
-            {conflict.head.message ? ` — “${conflict.head.message}”` : ''} was saved while you were editing revision {baseRevision}. Nothing was overwritten.
-          </p>
-          <div className="mt-3 flex flex-wrap gap-2">
-            <button type="button" className="btn" onClick={() => { load(designId, conflict.head.number, conflict.head.spec); save.reset(); }}>
-              Load theirs (drop my changes)
-            </button>
-            <button type="button" className="btn btn-primary" disabled={forkMine.isPending || baseRevision === null}
-              onClick={() => baseRevision !== null && forkMine.mutate(
-                { workshopId, title: `${title} (my variation)`, fromRevision: baseRevision, spec, message: message.trim() || 'My changes, forked after a save conflict' },
-                { onSuccess: (fork) => { save.reset(); navigate(linkTo.design(fork.id)); } },
-              )}>
-              {forkMine.isPending ? 'Forking…' : 'Fork mine'}
-            </button>
-          </div>
-          {forkMine.error && <ErrorNotice title="Could not fork" error={forkMine.error} className="mt-2" />}
-        </div>
+        <SaveConflictDialog designId={designId} workshopId={workshopId} title={title} conflict={conflict} spec={spec} message={message.trim()} onResolved={() => save.reset()} />
       )}
       {save.error && !conflict && <ErrorNotice title="Could not save" error={save.error} className="absolute right-4 z-30 mt-2 w-96" />}
     </div>

@@ -1,5 +1,6 @@
 import { Component, lazy, Suspense, type ComponentType, type ReactNode } from 'react';
 import type { PieceResult } from '../../shared/engine/types.ts';
+import type { RoomScene } from '../../shared/room/roomScene.ts';
 import { useEditorStore, type Cutaway, type ViewName } from '../state/useEditorStore.ts';
 
 /** What the 3D view takes (the contract of src/scene/PieceView.tsx). */
@@ -12,6 +13,7 @@ interface PieceViewProps {
   explode: number;
   cutaway: Cutaway | null;
   view: ViewName;
+  room?: RoomScene | null;
   className?: string;
 }
 
@@ -21,8 +23,11 @@ const sceneModules = import.meta.glob<{ default: ComponentType<PieceViewProps> }
 const loadPieceView = sceneModules['../scene/PieceView.tsx'];
 const PieceView = loadPieceView ? lazy(loadPieceView) : null;
 
-/** The live 3D view, driven by the editor store; a quiet panel while it loads or when it cannot. */
-export function SceneViewport({ result, stale }: { result: PieceResult; stale: boolean }) {
+/**
+ * The live 3D view, driven by the editor store; a quiet panel while it loads or when it cannot.
+ * With `room` (room fit's scene) the piece is drawn standing in its room, opened as checked.
+ */
+export function SceneViewport({ result, stale, room = null }: { result: PieceResult; stale: boolean; room?: RoomScene | null }) {
   const selectedPartId = useEditorStore((s) => s.selectedPartId);
   const hoveredPartId = useEditorStore((s) => s.hoveredPartId);
   const explode = useEditorStore((s) => s.explode);
@@ -44,6 +49,7 @@ export function SceneViewport({ result, stale }: { result: PieceResult; stale: b
               explode={explode}
               cutaway={cutaway}
               view={view}
+              room={room}
               className="h-full w-full"
             />
           </Suspense>

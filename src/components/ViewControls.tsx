@@ -15,12 +15,16 @@ const AXES = [
   { axis: 'z', label: 'Top down', index: 2 },
 ] as const;
 
-/** Preset views, the explode slider and the cut-away plane, under the 3D view. */
-export function ViewControls({ bboxMin, bboxSize }: { bboxMin: Vec3; bboxSize: Vec3 }) {
+/**
+ * Preset views, the explode slider and the cut-away plane, under the 3D view; with
+ * `roomAvailable`, the switch that stands the piece in its room (explode and cut-away then rest).
+ */
+export function ViewControls({ bboxMin, bboxSize, roomAvailable = false }: { bboxMin: Vec3; bboxSize: Vec3; roomAvailable?: boolean }) {
   const view = useEditorStore((s) => s.view);
+  const inRoom = useEditorStore((s) => s.roomView) && roomAvailable;
   const explode = useEditorStore((s) => s.explode);
   const cutaway = useEditorStore((s) => s.cutaway);
-  const { setView, setExplode, setCutaway } = useEditorStore.getState();
+  const { setView, setExplode, setCutaway, setRoomView } = useEditorStore.getState();
   const length = useLength();
   const axis = AXES.find((a) => a.axis === cutaway?.axis);
   const lo = axis ? bboxMin[axis.index] : 0;
@@ -36,14 +40,20 @@ export function ViewControls({ bboxMin, bboxSize }: { bboxMin: Vec3; bboxSize: V
           </button>
         ))}
       </div>
-      <label className="flex items-center gap-2">
+      {roomAvailable && (
+        <button type="button" aria-pressed={inRoom} onClick={() => setRoomView(!inRoom)} title="Show the piece standing in its room, opened as the room-fit checks open it"
+          className={`rounded-sm border border-graphite px-2 py-1 ${inRoom ? 'bg-graphite text-sheet' : 'hover:bg-paper-deep'}`}>
+          In the room
+        </button>
+      )}
+      <label className={`flex items-center gap-2 ${inRoom ? 'opacity-50' : ''}`}>
         <span className="text-graphite-soft">Explode</span>
-        <input type="range" min={0} max={1} step={0.05} value={explode} onChange={(e) => setExplode(Number(e.target.value))} className="w-28 accent-[var(--color-pencil)]" aria-valuetext={`${Math.round(explode * 100)} %`} />
+        <input type="range" disabled={inRoom} min={0} max={1} step={0.05} value={explode} onChange={(e) => setExplode(Number(e.target.value))} className="w-28 accent-[var(--color-pencil)]" aria-valuetext={`${Math.round(explode * 100)} %`} />
         <span className="dim w-8 text-right">{Math.round(explode * 100)}%</span>
       </label>
       <div className="flex items-center gap-2">
         <label htmlFor="cutaway-axis" className="text-graphite-soft">Cut-away</label>
-        <select id="cutaway-axis" className="rounded-sm border border-rule bg-sheet px-1 py-0.5"
+        <select id="cutaway-axis" disabled={inRoom} className="rounded-sm border border-rule bg-sheet px-1 py-0.5 disabled:opacity-50"
           value={cutaway?.axis ?? ''}
           onChange={(e) => {
             const next = AXES.find((a) => a.axis === e.target.value);

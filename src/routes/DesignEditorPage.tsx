@@ -15,6 +15,7 @@ import { ForkPanel } from '../components/ForkPanel.tsx';
 import { LoadingBlock } from '../components/LoadingBlock.tsx';
 import { ParamForm } from '../components/ParamForm.tsx';
 import { ResultTables } from '../components/ResultTables.tsx';
+import { RoomForm } from '../components/RoomForm.tsx';
 import { ReviewBar } from '../components/ReviewBar.tsx';
 import { RevisionHistory } from '../components/RevisionHistory.tsx';
 import { SaveBar } from '../components/SaveBar.tsx';
@@ -22,6 +23,7 @@ import { SceneViewport } from '../components/SceneViewport.tsx';
 import { TabPanel, Tabs } from '../components/Tabs.tsx';
 import { ViewControls } from '../components/ViewControls.tsx';
 import { buildOutcome } from '../editor/pieceBuild.ts';
+import { roomFitOutcome } from '../editor/roomFitOutcome.ts';
 import { historyShortcut } from '../editor/shortcuts.ts';
 import { useDebouncedValue } from '../state/useDebouncedValue.ts';
 import { useEditorStore } from '../state/useEditorStore.ts';
@@ -78,6 +80,10 @@ function Editor({ design, role, workshops, approvals }: { design: DesignData; ro
   const engineError = typedOutcome.ok ? null : { field: typedOutcome.field, message: typedOutcome.message };
   const dirty = spec !== savedSpec;
   const defs = useMemo(() => paramDefs(spec.kind), [spec.kind]);
+  const formTab = useEditorStore((s) => s.formTab);
+  const roomView = useEditorStore((s) => s.roomView);
+  const roomFit = roomFitOutcome(spec.room, result);
+  const fitted = roomFit.kind === 'fit' ? roomFit.fit : null;
   const partName = (id: string | null) => (id ? result?.parts.find((p) => p.id === id)?.name ?? id : null);
   const selectedPartId = useEditorStore((s) => s.selectedPartId);
 
@@ -134,7 +140,7 @@ function Editor({ design, role, workshops, approvals }: { design: DesignData; ro
           </button>
         )}
         {design.archived && <span className="rounded-sm bg-graphite px-1.5 py-0.5 text-[11px] uppercase tracking-widest text-sheet">Archived</span>}
-        {canEdit && <SaveBar designId={design.id} workshopId={design.workshopId} title={design.title} spec={spec} dirty={dirty} buildable={typedOutcome.ok} />}
+        {canEdit && <SaveBar designId={design.id} workshopId={design.workshopId} title={design.title} spec={spec} dirty={dirty} buildable={typedOutcome.ok && roomFit.kind !== 'invalid'} />}
       </header>
       {archive.error && <ErrorNotice title="Could not change the archive state" error={archive.error} className="mx-4 mt-2" />}
       {canReview && <ReviewBar designId={design.id} revision={baseRevision} approval={design.approval} />}
@@ -148,14 +154,24 @@ function Editor({ design, role, workshops, approvals }: { design: DesignData; ro
               <span className="font-semibold text-pencil">The piece cannot be built:</span> {engineError.message}
             </p>
           )}
-          <ParamForm defs={defs} spec={spec} readOnly={!canEdit} engineError={engineError} />
+          <div className="-mx-3 -mt-2 mb-1">
+            <Tabs label="Forms" idPrefix="form" active={formTab} onChange={useEditorStore.getState().setFormTab}
+              tabs={[{ key: 'piece', label: 'Piece' }, { key: 'room', label: <>Room{roomFit.kind === 'invalid' && <span className="ml-1 text-pencil" aria-label="has a bad value">•</span>}</> }]} />
+          </div>
+          <TabPanel idPrefix="form" tabKey={formTab}>
+            {formTab === 'piece' && <ParamForm defs={defs} spec={spec} readOnly={!canEdit} engineError={engineError} />}
+            {formTab === 'room' && (
+              <RoomForm state={{ room: spec.room, readOnly: !canEdit, invalid: roomFit.kind === 'invalid' ? roomFit : null }}
+                placedLeftMm={fitted ? fitted.placed.pose.alongMm + fitted.scene.piece.boxMm.min[0] : null} />
+            )}
+          </TabPanel>
         </aside>
 
         <section aria-label="Piece" className="flex min-h-0 min-w-0 flex-col xl:overflow-hidden">
           {result ? (
             <>
               <div className="relative h-[44vh] min-h-[260px] border-b border-rule bg-paper">
-                <SceneViewport result={result} stale={!outcome.ok} />
+                <SceneViewport result={result} stale={!outcome.ok} room={roomView && fitted ? fitted.scene : null} />
                 {selectedPartId && (
                   <p className="absolute bottom-2 left-2 rounded-sm bg-sheet/90 px-2 py-0.5 text-xs shadow">
                     Selected: <span className="font-semibold">{partName(selectedPartId)}</span>
@@ -163,9 +179,9 @@ function Editor({ design, role, workshops, approvals }: { design: DesignData; ro
                   </p>
                 )}
               </div>
-              <ViewControls bboxMin={result.bboxMinMm} bboxSize={result.bboxMm} />
+              <ViewControls bboxMin={result.bboxMinMm} bboxSize={result.bboxMm} roomAvailable={fitted !== null} />
               <div className="flex min-h-[16rem] flex-1 flex-col overflow-hidden bg-sheet">
-                <ResultTables result={result} spec={spec} readOnly={!canEdit} />
+                <ResultTables result={result} spec={spec} readOnly={!canEdit} design={design} />
               </div>
             </>
           ) : (

@@ -29,6 +29,10 @@ interface EditorState {
   explode: number;
   cutaway: Cutaway | null;
   view: ViewName;
+  /** True when the 3D view shows the piece standing in its room (the spec's room section). */
+  roomView: boolean;
+  /** Which form the parameter column shows: the piece's parameters or its room. */
+  formTab: 'piece' | 'room';
 
   /** Starts editing `spec` of `designId` at `revision`, forgetting the previous history. */
   load: (designId: string, revision: number, spec: PieceSpec) => void;
@@ -37,6 +41,13 @@ interface EditorState {
   /** Sets a parameter; `typing` merges successive keystrokes in one field into one undo step. */
   setParam: (key: string, value: ParamValue, typing?: boolean) => void;
   setClimate: (climate: Climate | undefined) => void;
+  /**
+   * Sets the room section (`undefined` removes it); `typing` names the room field being typed
+   * in, so its keystrokes merge into one undo step as a parameter's do.
+   */
+  setRoom: (room: unknown, typing?: string | null) => void;
+  /** Replaces the whole spec as one undo step (a proposal the maker applied, such as fit to niche). */
+  replaceSpec: (spec: PieceSpec) => void;
   /** Ends the step for the field being typed in (on leaving it). */
   sealStep: () => void;
   undo: () => void;
@@ -46,6 +57,8 @@ interface EditorState {
   setExplode: (explode: number) => void;
   setCutaway: (cutaway: Cutaway | null) => void;
   setView: (view: ViewName) => void;
+  setRoomView: (roomView: boolean) => void;
+  setFormTab: (formTab: 'piece' | 'room') => void;
 }
 
 export const useEditorStore = create<EditorState>()((set) => ({
@@ -58,6 +71,8 @@ export const useEditorStore = create<EditorState>()((set) => ({
   explode: 0,
   cutaway: null,
   view: 'three-quarter',
+  roomView: false,
+  formTab: 'piece',
 
   load: (designId, revision, spec) =>
     set({ designId, baseRevision: revision, history: startHistory(spec), savedSpec: spec, selectedPartId: null, hoveredPartId: null }),
@@ -74,6 +89,13 @@ export const useEditorStore = create<EditorState>()((set) => ({
       const { climate: _old, ...rest } = state.history.present;
       return { history: record(state.history, climate ? { ...rest, climate } : rest, null) };
     }),
+  setRoom: (room, typing = null) =>
+    set((state) => {
+      if (!state.history || state.history.present.room === room) return {};
+      const { room: _old, ...rest } = state.history.present;
+      return { history: record(state.history, room === undefined ? rest : { ...rest, room }, typing === null ? null : `room:${typing}`) };
+    }),
+  replaceSpec: (spec) => set((state) => (state.history && state.history.present !== spec ? { history: record(state.history, spec, null) } : {})),
   sealStep: () => set((state) => (state.history ? { history: seal(state.history) } : {})),
   undo: () => set((state) => (state.history ? { history: undo(state.history) } : {})),
   redo: () => set((state) => (state.history ? { history: redo(state.history) } : {})),
@@ -82,4 +104,6 @@ export const useEditorStore = create<EditorState>()((set) => ({
   setExplode: (explode) => set({ explode: Math.min(1, Math.max(0, explode)) }),
   setCutaway: (cutaway) => set({ cutaway }),
   setView: (view) => set({ view }),
+  setRoomView: (roomView) => set({ roomView }),
+  setFormTab: (formTab) => set({ formTab }),
 }));
