@@ -39,3 +39,20 @@ export function drawerFitChecks(f: DrawerFitFacts): Check[] {
   }
   return out;
 }
+
+/**
+ * How far the drawers come out, for room fit: full-extension slides bring the whole box out
+ * (the usual ball-bearing and undermount slides; common practice, check the slide you buy);
+ * wooden runners have no stop, so a drawer can come all the way out.
+ */
+export function drawerTravelCheck(drawers: readonly { partIds: readonly string[]; boxDepthMm: number }[], slide: SlideType): Check[] {
+  if (drawers.length === 0) return [];
+  const travelMm = Math.max(...drawers.map((d) => d.boxDepthMm));
+  return [check({
+    id: 'drawer-travel', severity: 'info', title: 'How far the drawers open', partIds: [...new Set(drawers.flatMap((d) => d.partIds))],
+    numbers: { travelMm, drawers: drawers.length },
+    message: slide === 'wood-runners'
+      ? `The drawers run on wooden runners with no stop: each can come all the way out, ${both(travelMm)} at the deepest. Leave that much clear floor in front.`
+      : `On full-extension ${slide} slides each drawer opens its whole depth, ${both(travelMm)} at the deepest. Leave that much clear floor in front.`,
+  })];
+}

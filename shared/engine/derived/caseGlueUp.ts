@@ -14,7 +14,25 @@ export function caseGlueUpStages(parts: readonly Part[]): GlueUpStage[] {
   const doorPanels = ids(parts, ['door-panel']);
   const drawerBottoms = ids(parts, ['drawer-bottom']);
   const grooveBack = parts.some((p) => p.role === 'back' && p.notes.some((n) => n.includes('Slides into its grooves')));
+  // A dresser built like the chest glues its sides on the legs first, then joins them.
+  const legs = ids(parts, ['leg']);
+  const framedPanels = parts.filter((p) => p.role === 'panel').map((p) => p.id);
+  const sideFrame = parts.filter((p) => (p.role === 'rail' || p.role === 'stile') && p.id.startsWith('side-')).map((p) => p.id);
+  const joining = parts.filter((p) => (p.role === 'rail' || p.role === 'stile') && !p.id.startsWith('side-')).map((p) => p.id);
+  const framed: Omit<GlueUpStage, 'stage'>[] = legs.length === 0 ? [] : [
+    {
+      title: 'The two sides on their legs',
+      steps: [{ title: 'Glue each side: two legs, the side rails and stiles, with the side panels in dry', partIds: [...legs, ...sideFrame, ...framedPanels.filter((id) => id.startsWith('side-'))], notes: ['Glue only the tenons; keep glue out of the panel grooves.', 'Check each side for square across its diagonals.'] }],
+      floatingPartIds: framedPanels.filter((id) => id.startsWith('side-')),
+    },
+    {
+      title: 'Join the sides with the back and the web frames',
+      steps: [{ title: 'Glue the back rails and the web frames\' rails into the legs, the back panel in dry', partIds: [...joining, ...ids(parts, ['runner']), ...framedPanels.filter((id) => !id.startsWith('side-'))], notes: ['Glue the runners into the front rails only.', 'Dry-fit first; check the case for square and the web frames for level.'] }],
+      floatingPartIds: framedPanels.filter((id) => !id.startsWith('side-')),
+    },
+  ];
   const stages: Omit<GlueUpStage, 'stage'>[] = [
+    ...framed,
     {
       title: 'Wide parts, face frame, door frames and drawer boxes',
       steps: [

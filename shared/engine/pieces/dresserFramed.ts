@@ -24,7 +24,7 @@ import { boxBetween, boxSize, boxUnion } from '../geometry/box.ts';
 import type { FeatureDraft } from '../geometry/featureDescribe.ts';
 import type { WallFrame } from '../geometry/wallFrame.ts';
 import type { Check, Material } from '../types.ts';
-import { drawerFitChecks } from '../checks/drawerFit.ts';
+import { drawerFitChecks, drawerTravelCheck } from '../checks/drawerFit.ts';
 import { frontClearanceChecks, revealChecks } from '../checks/fronts.ts';
 import { railTongueCheck, stoppedGrooveCheck } from '../checks/joinery.ts';
 import { panelFloatCheck } from '../checks/panelFloat.ts';
@@ -280,6 +280,7 @@ export function buildFramedDresser(p: P, top: TopPlan, d: DrawerPlan, rows: numb
       id: `${f.dl.row + 1}-${f.dl.col + 1}`, where: f.where, partIds: idsOf(f.drafts), openingHeightMm: f.dl.opening.z[1] - f.dl.opening.z[0],
       boxHeightMm: f.dl.box.z[1] - f.dl.box.z[0], availableDepthMm: f.dl.availableDepthMm, boxDepthMm: f.dl.box.y[1] - f.dl.box.y[0], slide: 'wood-runners', rule: SLIDE_RULES['wood-runners'],
     })),
+    ...drawerTravelCheck(fitFacts.map((f) => ({ partIds: idsOf(f.drafts), boxDepthMm: f.dl.box.y[1] - f.dl.box.y[0] })), 'wood-runners'),
     ...revealChecks(idsOf(fronts.map((f) => f.draft)), lay.frame, p.frontMount, p.reveal, p.overlay, rows, columns),
     ...frontClearanceChecks(fronts.map((f) => ({ ...f.facts, partIds: idsOf([f.draft]) }))),
     ...stockSizeChecks(assembled.parts, p.maxBoardLength, p.maxBoardWidth),

@@ -8,7 +8,7 @@ import { jointFitProblems } from '../helpers/jointFit.ts';
 import { overlappingPairs } from '../helpers/solids.ts';
 
 const SIZE_TOLERANCE_MM = 1e-6;
-const RUNS = 300;
+const RUNS = 500;
 // Hundreds of builds with pairwise solid checks take a while on a busy machine.
 const PROPERTY_TIMEOUT_MS = 600_000;
 const FITTED_JOINTS = ['stub-tenon', 'panel-in-groove', 'tongue-and-dado'] as const;

@@ -103,6 +103,10 @@ describe('buildPiece (dresser), worked by hand', () => {
     expect(r.derived.cutList.find((g) => g.materialKind === 'sheet')?.rows.length).toBeGreaterThan(0);
   });
 
+  it('says how far the drawers open, for room fit: the whole 18 in box on full-extension slides', () => {
+    within(r.checks.find((c) => c.id === 'drawer-travel')?.numbers.travelMm, 457.2);
+  });
+
   it('cautions that the dresser can tip over, naming ASTM F2057', () => {
     const c = r.checks.find((x) => x.id === 'tip-over');
     expect(c?.severity).toBe('caution');
@@ -204,6 +208,12 @@ describe('buildPiece (dresser) built like the chest', () => {
   it('has no errors, and every leg carries a mortise for each web frame', () => {
     expect(r.checks.filter((c) => c.severity === 'error')).toEqual([]);
     expect(part(r, 'front-left-leg').features.filter((f) => f.type === 'mortise')).toHaveLength(4);
+  });
+
+  it('glues the sides on their legs first, the panels floating', () => {
+    const first = r.derived.glueUp[0]!;
+    expect(first.title).toMatch(/sides on their legs/);
+    expect(first.floatingPartIds).toContain('side-panel');
   });
 
   it('refuses slides other than wooden runners, naming slideType', () => {
