@@ -22,7 +22,7 @@ export type Access =
   | { kind: 'signedIn' }
   | { kind: 'member'; action: Action; scope: Scope };
 
-export type Method = 'get' | 'post' | 'patch' | 'delete';
+export type Method = 'get' | 'post' | 'put' | 'patch' | 'delete';
 
 /** One API route: its method, its path under `/api`, who may call it, and the handler. */
 export interface RouteDef {

@@ -1,7 +1,8 @@
 /**
  * The demo: Tidewater Joinery, an invented small shop on the coast, with three invented people
  * (server/db/demo-accounts.json, the sign-ins `npm start` prints) and a few designs with
- * revisions, a fork, comments and an approval. Nothing here is a real business, person or price.
+ * revisions, a fork, comments, an approval and a price list. Nothing here is a real business,
+ * person or price.
  *
  * Idempotent: people, the workshop, memberships and each design are created only when missing,
  * so running it again changes nothing — except to add a piece kind the engine has learned since.
@@ -17,6 +18,7 @@ import type { Role } from '../../shared/permissions.ts';
 import { hashPassword } from '../auth/password.ts';
 import { createCommentService } from '../features/comments/comments.service.ts';
 import { createDesignService } from '../features/designs/designs.service.ts';
+import { seedDemoPriceList } from './demoPriceList.ts';
 import { modelsFor } from './models/index.ts';
 
 export const DEMO_WORKSHOP = 'Tidewater Joinery';
@@ -72,6 +74,8 @@ export async function seedDemo(sequelize: Sequelize): Promise<boolean> {
     });
     created ||= made;
   }
+  // Invented prices (see demoPriceList.ts), so the Materials page can cost the demo pieces.
+  created = (await seedDemoPriceList(sequelize, workshopId, people.owner)) || created;
 
   const existing = async (title: string) => models.Design.findOne({ where: { workshopId, title } });
 

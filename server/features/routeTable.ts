@@ -9,6 +9,7 @@ import type { FeatureDeps } from './context.ts';
 import { designRoutes } from './designs/designs.routes.ts';
 import { invitationRoutes } from './invitations/invitations.routes.ts';
 import { mailRoutes } from './mail/mail.routes.ts';
+import { priceListRoutes } from './priceLists/priceLists.routes.ts';
 import { workshopRoutes } from './workshops/workshops.routes.ts';
 
 export function apiRouteTable(deps: FeatureDeps): RouteDef[] {
@@ -18,6 +19,7 @@ export function apiRouteTable(deps: FeatureDeps): RouteDef[] {
     ...invitationRoutes(deps),
     ...designRoutes(deps),
     ...commentRoutes(deps),
+    ...priceListRoutes(deps),
     // The mail catcher's inbox exists only outside production, when the app runs one.
     ...(deps.mailbox && !deps.config.isProduction ? mailRoutes(deps.mailbox) : []),
   ];

@@ -108,6 +108,12 @@ const CASES: Record<string, Case> = {
   'post /designs/:designId/comments': { success: 201, request: (w) => ({ path: `/designs/${w.designId}/comments`, body: { body: 'A note', revision: 1, partId: 'leg' } }) },
   'get /designs/:designId/approvals': { success: 200, request: (w) => ({ path: `/designs/${w.designId}/approvals` }) },
   'post /designs/:designId/approvals': { success: 201, request: (w) => ({ path: `/designs/${w.designId}/approvals`, body: { revision: 2, decision: 'approved' } }) },
+  'get /workshops/:workshopId/price-list': { success: 200, request: (w) => ({ path: `/workshops/${w.workshopId}/price-list` }) },
+  'put /workshops/:workshopId/price-list': {
+    success: 200,
+    request: (w) => ({ path: `/workshops/${w.workshopId}/price-list`, body: { currency: 'USD', items: [{ kind: 'sheet', sheetId: 'hardwood-plywood-3/4', pricePerSheetCents: 9000 }] } }),
+  },
+  'post /workshops/:workshopId/price-list/csv': { success: 200, request: (w) => ({ path: `/workshops/${w.workshopId}/price-list/csv`, body: 'kind,item,price\nsheet,hardwood-plywood-3/4,90.00\n' }) },
   'get /dev/mail': { success: 200, request: () => ({ path: '/dev/mail' }) },
 };
 

@@ -10,6 +10,7 @@ import { defineDesign } from './Design.ts';
 import { defineInvitation } from './Invitation.ts';
 import { defineMembership } from './Membership.ts';
 import { definePasswordReset } from './PasswordReset.ts';
+import { definePriceList } from './PriceList.ts';
 import { defineRevision } from './Revision.ts';
 import { defineUser } from './User.ts';
 import { defineWorkshop } from './Workshop.ts';
@@ -25,6 +26,7 @@ function defineModels(sequelize: Sequelize) {
     Revision: defineRevision(sequelize),
     Comment: defineComment(sequelize),
     Approval: defineApproval(sequelize),
+    PriceList: definePriceList(sequelize),
   };
 }
 

@@ -62,8 +62,13 @@ export class Client {
   get(path: string) {
     return this.agent.get(path);
   }
+  /** A string body goes as `text/csv` (the price-list upload); anything else as JSON. */
   post(path: string, body?: unknown) {
-    return this.agent.post(path).set('x-csrf-token', this.csrf).send(body as object);
+    const req = this.agent.post(path).set('x-csrf-token', this.csrf);
+    return typeof body === 'string' ? req.type('text/csv').send(body) : req.send(body as object);
+  }
+  put(path: string, body?: unknown) {
+    return this.agent.put(path).set('x-csrf-token', this.csrf).send(body as object);
   }
   patch(path: string, body?: unknown) {
     return this.agent.patch(path).set('x-csrf-token', this.csrf).send(body as object);
@@ -72,7 +77,8 @@ export class Client {
     return this.agent.delete(path).set('x-csrf-token', this.csrf);
   }
   /** Send any method; used by the authorisation matrix. */
-  send(method: 'get' | 'post' | 'patch' | 'delete', path: string, body?: unknown) {
+  send(method: 'get' | 'post' | 'put' | 'patch' | 'delete', path: string, body?: unknown) {
+    if (method === 'put') return this.put(path, body);
     return method === 'get' ? this.get(path) : method === 'post' ? this.post(path, body) : method === 'patch' ? this.patch(path, body) : this.delete(path);
   }
 
