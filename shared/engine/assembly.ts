@@ -58,19 +58,23 @@ export interface Assembled {
 
 const round6 = (n: number): number => Math.round(n * 1e6) / 1e6;
 
-// A compact key of a part's shape: numbers snapped to 0.1 µm so binary noise never splits
-// identical parts. The grid is offset by 0.3 of a step: inch fractions and 0.1 mm values land
-// on multiples of 1/8 step and never near a snapping boundary. Every measured number of a
-// feature follows from its boxes, so the boxes, type, face and id are the whole key.
+// A part's shape as a flat list of strings and whole numbers, compared element by element:
+// numbers snapped to 0.1 µm so binary noise never splits identical parts. The grid is offset
+// by 0.3 of a step: inch fractions and 0.1 mm values land on multiples of 1/8 step and never
+// near a snapping boundary. Every measured number of a feature follows from its boxes, so the
+// boxes, type, face and id are the whole shape. A list rather than one joined string: building
+// and hashing a long string per instance was the largest single cost of matching parts.
+type ShapeKey = (string | number)[];
+
 const snap = (n: number): number => Math.round(n * 1e4 + 0.3);
 
-function pushBox(out: (string | number)[], box: Box3): void {
+function pushBox(out: ShapeKey, box: Box3): void {
   out.push(snap(box.min[0]), snap(box.min[1]), snap(box.min[2]), snap(box.max[0]), snap(box.max[1]), snap(box.max[2]));
 }
 
-function signature(draft: PartDraft, features: readonly Feature[]): string {
+function shapeKey(draft: PartDraft, features: readonly Feature[]): ShapeKey {
   const material = draft.material.kind === 'solid' ? draft.material.speciesId : draft.material.sheetId;
-  const out: (string | number)[] = [draft.role, material, draft.grain, snap(draft.size[0]), snap(draft.size[1]), snap(draft.size[2]), draft.glueUp?.boards ?? 0];
+  const out: ShapeKey = [draft.role, material, draft.grain, snap(draft.size[0]), snap(draft.size[1]), snap(draft.size[2]), draft.glueUp?.boards ?? 0];
   for (const f of features) {
     out.push('|', f.id, f.type, f.face);
     for (const box of f.removed) pushBox(out, box);
@@ -78,7 +82,13 @@ function signature(draft: PartDraft, features: readonly Feature[]): string {
     if (f.type === 'hole' || f.type === 'slot') out.push(snap(f.diameterMm));
     if (f.type === 'slot') out.push(snap(f.slotLengthMm));
   }
-  return out.join(',');
+  return out;
+}
+
+function sameShape(a: ShapeKey, b: ShapeKey): boolean {
+  if (a.length !== b.length) return false;
+  for (let i = 0; i < a.length; i++) if (a[i] !== b[i]) return false;
+  return true;
 }
 
 /** The same part turned end for end about its thickness axis: still a rotation. */
@@ -89,29 +99,46 @@ function turned(axes: AxisMap): AxisMap {
 
 /** Features of `draft` in its frame for `axes`, with templated ids filled in. */
 function describeAll(draft: PartDraft, axes: AxisMap): { features: Feature[]; ids: Map<string, string> } {
-  const described = draft.features.map((f) => describeFeature(f, draft.size, axes, draft.world.min));
-  const ids = new Map<string, string>();
-  const counters = new Map<string, number>();
-  const order = described
-    .map((feature, i) => ({ feature, draft: draft.features[i]! }))
-    .sort((a, b) => {
-      const ra = a.feature.removed[0] ?? (a.feature.type === 'tongue' ? a.feature.tongue : undefined);
-      const rb = b.feature.removed[0] ?? (b.feature.type === 'tongue' ? b.feature.tongue : undefined);
-      return (ra?.min[0] ?? 0) - (rb?.min[0] ?? 0) || (ra?.min[1] ?? 0) - (rb?.min[1] ?? 0) || (ra?.min[2] ?? 0) - (rb?.min[2] ?? 0);
-    });
-  const renamed = new Map<Feature, Feature>();
-  for (const { feature, draft: fd } of order) {
-    let id = fd.id;
-    if (fd.idTemplate) {
-      const n = (counters.get(fd.idTemplate) ?? 0) + 1;
-      counters.set(fd.idTemplate, n);
-      id = fd.idTemplate.replace('{face}', feature.face).replace('{n}', String(n));
-    }
-    ids.set(fd.id, id);
-    renamed.set(feature, id === feature.id ? feature : Object.assign({}, feature, { id }));
+  const drafts = draft.features;
+  const described: Feature[] = [];
+  let templated = false;
+  for (const fd of drafts) {
+    described.push(describeFeature(fd, draft.size, axes, draft.world.min));
+    if (fd.idTemplate) templated = true;
   }
-  const features = described.map((f) => renamed.get(f)!).sort((a, b) => (a.id < b.id ? -1 : a.id > b.id ? 1 : 0));
+  const ids = new Map<string, string>();
+  if (templated) {
+    // Templated ids number features in order along the part: by the low corner of each one's
+    // first box (a tongue's own solid when it removes nothing).
+    const low = (f: Feature): Vec3 | undefined => (f.removed[0] ?? (f.type === 'tongue' ? f.tongue : undefined))?.min;
+    const order = described.map((_, i) => i).sort((i, j) => {
+      const ra = low(described[i]!);
+      const rb = low(described[j]!);
+      return (ra?.[0] ?? 0) - (rb?.[0] ?? 0) || (ra?.[1] ?? 0) - (rb?.[1] ?? 0) || (ra?.[2] ?? 0) - (rb?.[2] ?? 0);
+    });
+    const counters = new Map<string, number>();
+    for (const i of order) {
+      const fd = drafts[i]!;
+      const feature = described[i]!;
+      let id = fd.id;
+      if (fd.idTemplate) {
+        const n = (counters.get(fd.idTemplate) ?? 0) + 1;
+        counters.set(fd.idTemplate, n);
+        id = fd.idTemplate.replace('{face}', feature.face).replace('{n}', String(n));
+      }
+      ids.set(fd.id, id);
+      if (id !== feature.id) described[i] = Object.assign({}, feature, { id });
+    }
+  }
+  const features = described.sort((a, b) => (a.id < b.id ? -1 : a.id > b.id ? 1 : 0));
   return { features, ids };
+}
+
+/** Identical instances of one part, in the order first met. */
+interface PartClass {
+  key: ShapeKey;
+  drafts: PartDraft[];
+  features: Feature[];
 }
 
 /** Merges identical instances into parts and resolves joints to part ids. */
@@ -119,32 +146,48 @@ export function assemble(drafts: readonly PartDraft[], joints: readonly JointDra
   // An instance keeps its own orientation unless, turned end for end about its thickness axis,
   // it matches a part already seen: so a panel and its turned twin come out as one part, while
   // a leg still reads from its foot.
-  const classes = new Map<string, { drafts: PartDraft[]; features: Feature[] }>();
+  // Instances merge only within their group, and a group holds a few shapes at most, so each
+  // instance is compared with its group's shapes one by one.
+  const classes: PartClass[] = [];
+  const byGroup = new Map<string, PartClass[]>();
   const chosen = new Map<PartDraft, { axes: AxisMap; ids: Map<string, string> }>();
-  const groupsSeen = new Set<string>();
   for (const draft of drafts) {
     const a = describeAll(draft, draft.axes);
-    const keyA = `${draft.group}|${signature(draft, a.features)}`;
-    let pick = { key: keyA, axes: draft.axes, described: a };
+    const keyA = shapeKey(draft, a.features);
+    const inGroup = byGroup.get(draft.group);
+    let axes = draft.axes;
+    let described = a;
+    let key = keyA;
+    let match = inGroup?.find((c) => sameShape(c.key, keyA));
     // Only a group already holding a part can hold this one's turned twin.
-    if (!classes.has(keyA) && groupsSeen.has(draft.group)) {
+    if (!match && inGroup) {
       const other = turned(draft.axes);
       const b = describeAll(draft, other);
-      const keyB = `${draft.group}|${signature(draft, b.features)}`;
-      if (classes.has(keyB)) pick = { key: keyB, axes: other, described: b };
+      const keyB = shapeKey(draft, b.features);
+      const twin = inGroup.find((c) => sameShape(c.key, keyB));
+      if (twin) {
+        match = twin;
+        axes = other;
+        described = b;
+        key = keyB;
+      }
     }
-    groupsSeen.add(draft.group);
-    chosen.set(draft, { axes: pick.axes, ids: pick.described.ids });
-    const existing = classes.get(pick.key);
-    if (existing) existing.drafts.push(draft);
-    else classes.set(pick.key, { drafts: [draft], features: pick.described.features });
+    chosen.set(draft, { axes, ids: described.ids });
+    if (match) {
+      match.drafts.push(draft);
+      continue;
+    }
+    const created: PartClass = { key, drafts: [draft], features: described.features };
+    classes.push(created);
+    if (inGroup) inGroup.push(created);
+    else byGroup.set(draft.group, [created]);
   }
 
   const parts: Part[] = [];
   const placements: Placement[] = [];
   const partIdOf = new Map<PartDraft, string>();
   const used = new Map<string, number>();
-  for (const { drafts: same, features } of classes.values()) {
+  for (const { drafts: same, features } of classes) {
     const first = same[0]!;
     const named = first.name(same.map((d) => d.member));
     // Two different parts may earn the same name (end panels and centre panels): number them.

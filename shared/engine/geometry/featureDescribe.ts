@@ -6,7 +6,6 @@
  */
 import { assert } from '../../assert.ts';
 import type { Box3, Feature, FeatureType, PartFace, Vec3, WorldAxis } from '../types.ts';
-import { boxSize } from './box.ts';
 import { localFaceOf, worldBoxToLocal, type AxisMap } from './placement.ts';
 
 /** A feature drawn in world coordinates, before it is mapped into its part. */
@@ -35,6 +34,9 @@ export interface FeatureDraft {
 const NORMAL_AXIS: Record<PartFace, 0 | 1 | 2> = {
   'end-a': 0, 'end-b': 0, 'edge-a': 1, 'edge-b': 1, 'face-a': 2, 'face-b': 2,
 };
+
+/** The two local axes in the plane of a face, by the face's normal axis. */
+const IN_PLANE: Readonly<Record<0 | 1 | 2, readonly [number, number]>> = [[1, 2], [0, 2], [0, 1]];
 
 function extent(box: Box3, axis: number): number {
   return box.max[axis]! - box.min[axis]!;
@@ -69,9 +71,8 @@ export function describeFeature(draft: FeatureDraft, size: Vec3, axes: AxisMap, 
 
   const main = removed[0];
   if (!main) assert(false, `feature ${draft.id} removes nothing`);
-  const sizeOf = boxSize(main!);
   // The axis a groove runs along is the longer of the two in the face's plane.
-  const inPlane = normal === 0 ? [1, 2] : normal === 1 ? [0, 2] : [0, 1];
+  const inPlane = IN_PLANE[normal];
   const along = extent(main!, inPlane[1]!) > extent(main!, inPlane[0]!) ? inPlane[1]! : inPlane[0]!;
   const across = third(normal, along);
 
@@ -91,7 +92,7 @@ export function describeFeature(draft: FeatureDraft, size: Vec3, axes: AxisMap, 
       return Object.assign(base, { type: 'rabbet', widthMm: extent(main!, normal), depthMm: extent(main!, depthAxis), lengthMm: extent(main!, runAxis) } as const);
     }
     case 'notch':
-      return Object.assign(base, { type: 'notch', lengthMm: sizeOf[0], widthMm: sizeOf[1], depthMm: sizeOf[2], atMm: [main!.min[0], main!.min[1]] } as const);
+      return Object.assign(base, { type: 'notch', lengthMm: extent(main!, 0), widthMm: extent(main!, 1), depthMm: extent(main!, 2), atMm: [main!.min[0], main!.min[1]] } as const);
     case 'recess':
     case 'mortise':
       return Object.assign(base, { type: draft.type, lengthMm: extent(main!, inPlane[0]!), widthMm: extent(main!, inPlane[1]!),

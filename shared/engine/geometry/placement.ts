@@ -8,16 +8,30 @@ import type { Box3, PartFace, Placement, Vec3, WorldAxis } from '../types.ts';
 /** Local axes → signed world axes, as stored on a {@link Placement}. */
 export type AxisMap = Placement['axes'];
 
-const AXIS_INDEX = { X: 0, Y: 1, Z: 2 } as const;
+interface ParsedAxis {
+  readonly index: 0 | 1 | 2;
+  readonly sign: 1 | -1;
+}
 
-function parseAxis(axis: WorldAxis): { index: 0 | 1 | 2; sign: 1 | -1 } {
-  return { index: AXIS_INDEX[axis[1] as 'X' | 'Y' | 'Z'], sign: axis[0] === '-' ? -1 : 1 };
+// One shared answer per axis, read from the characters: parsing runs for every box of every cut
+// on each rebuild, where a fresh object per call, or a keyed lookup on a string built at run
+// time, was a measurable share of the engine's time.
+const PARSED: readonly (readonly [ParsedAxis, ParsedAxis])[] = [
+  [{ index: 0, sign: -1 }, { index: 0, sign: 1 }],
+  [{ index: 1, sign: -1 }, { index: 1, sign: 1 }],
+  [{ index: 2, sign: -1 }, { index: 2, sign: 1 }],
+];
+const CODE_X = 'X'.charCodeAt(0);
+const CODE_MINUS = '-'.charCodeAt(0);
+
+function parseAxis(axis: WorldAxis): ParsedAxis {
+  return PARSED[axis.charCodeAt(1) - CODE_X]![axis.charCodeAt(0) === CODE_MINUS ? 0 : 1];
 }
 
 // Hot paths below use plain loops: the engine places every part and cut of a piece on each
-// keystroke, and per-call closures cost more than the arithmetic.
-function localAxes(axes: AxisMap): readonly [WorldAxis, WorldAxis, WorldAxis] {
-  return [axes.length, axes.width, axes.thickness];
+// keystroke, and per-call closures and arrays cost more than the arithmetic.
+function localAxis(axes: AxisMap, local: number): WorldAxis {
+  return local === 0 ? axes.length : local === 1 ? axes.width : axes.thickness;
 }
 
 /** The 3×3 rotation matrix of `axes`, columns = where local x, y, z point. */
@@ -27,9 +41,8 @@ export function axisMatrix(axes: AxisMap): number[][] {
     [0, 0, 0],
     [0, 0, 0],
   ];
-  const list = localAxes(axes);
   for (let column = 0; column < 3; column++) {
-    const { index, sign } = parseAxis(list[column]!);
+    const { index, sign } = parseAxis(localAxis(axes, column));
     m[index]![column] = sign;
   }
   return m;
@@ -37,20 +50,21 @@ export function axisMatrix(axes: AxisMap): number[][] {
 
 /** Determinant of the axis mapping: +1 for a rotation, -1 for a mirror, 0 when axes repeat. */
 export function axisDeterminant(axes: AxisMap): number {
-  const m = axisMatrix(axes);
-  const r = (i: number, j: number): number => m[i]![j]!;
-  return (
-    r(0, 0) * (r(1, 1) * r(2, 2) - r(1, 2) * r(2, 1)) -
-    r(0, 1) * (r(1, 0) * r(2, 2) - r(1, 2) * r(2, 0)) +
-    r(0, 2) * (r(1, 0) * r(2, 1) - r(1, 1) * r(2, 0))
-  );
+  // A signed permutation matrix: its determinant is the product of the signs times the
+  // permutation's parity, and 0 when two local axes share a world axis.
+  const a = parseAxis(axes.length);
+  const b = parseAxis(axes.width);
+  const c = parseAxis(axes.thickness);
+  if (a.index === b.index || b.index === c.index || a.index === c.index) return 0;
+  // (0 1 2), (1 2 0) and (2 0 1) are the even permutations.
+  const even = (b.index - a.index + 3) % 3 === 1;
+  return a.sign * b.sign * c.sign * (even ? 1 : -1);
 }
 
 /** The part's size along world X, Y and Z once turned by `axes`, mm. */
 export function worldSize(axes: AxisMap, size: Vec3): Vec3 {
   const out: [number, number, number] = [0, 0, 0];
-  const list = localAxes(axes);
-  for (let i = 0; i < 3; i++) out[parseAxis(list[i]!).index] = size[i]!;
+  for (let i = 0; i < 3; i++) out[parseAxis(localAxis(axes, i)).index] = size[i]!;
   return out;
 }
 
@@ -61,9 +75,8 @@ export function worldSize(axes: AxisMap, size: Vec3): Vec3 {
 export function localBoxToWorld(box: Box3, size: Vec3, axes: AxisMap, positionMm: Vec3): Box3 {
   const min: [number, number, number] = [0, 0, 0];
   const max: [number, number, number] = [0, 0, 0];
-  const list = localAxes(axes);
   for (let i = 0; i < 3; i++) {
-    const { index, sign } = parseAxis(list[i]!);
+    const { index, sign } = parseAxis(localAxis(axes, i));
     const lo = sign > 0 ? box.min[i]! : size[i]! - box.max[i]!;
     const hi = sign > 0 ? box.max[i]! : size[i]! - box.min[i]!;
     min[index] = positionMm[index]! + lo;
@@ -98,9 +111,8 @@ export function placeInto(
 export function worldBoxToLocal(box: Box3, size: Vec3, axes: AxisMap, positionMm: Vec3): Box3 {
   const min: [number, number, number] = [0, 0, 0];
   const max: [number, number, number] = [0, 0, 0];
-  const list = localAxes(axes);
   for (let i = 0; i < 3; i++) {
-    const { index, sign } = parseAxis(list[i]!);
+    const { index, sign } = parseAxis(localAxis(axes, i));
     const lo = box.min[index]! - positionMm[index]!;
     const hi = box.max[index]! - positionMm[index]!;
     min[i] = sign > 0 ? lo : size[i]! - hi;
@@ -118,9 +130,8 @@ const FACE_BY_LOCAL: readonly (readonly [PartFace, PartFace])[] = [
 /** The face of a placed part that looks toward the world direction `direction`. */
 export function localFaceOf(axes: AxisMap, direction: WorldAxis): PartFace {
   const wanted = parseAxis(direction);
-  const list = localAxes(axes);
   for (let local = 0; local < 3; local++) {
-    const axis = parseAxis(list[local]!);
+    const axis = parseAxis(localAxis(axes, local));
     if (axis.index === wanted.index) return FACE_BY_LOCAL[local]![axis.sign * wanted.sign > 0 ? 1 : 0]!;
   }
   throw new Error(`Assertion failed: no local axis maps to ${direction}`);
