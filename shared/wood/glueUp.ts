@@ -42,26 +42,33 @@ export interface GlueUpPlan {
  * boards, equal widths or the widest in the middle, and the panel's seasonal movement.
  */
 export function planGlueUp(input: GlueUpInput): GlueUpPlan {
-  checkWidth(input.panelWidthMm, 'panelWidthMm');
-  checkWidth(input.maxBoardWidthMm, 'maxBoardWidthMm');
-  if (input.arrangement !== 'equal' && input.arrangement !== 'widest-middle') {
-    throw new InputError('arrangement', `must be equal or widest-middle (got "${String(input.arrangement)}")`, 'equal, widest-middle');
-  }
+  const boardWidthsMm = glueUpBoardWidthsMm(input);
   const movement = seasonalSwing({ widthMm: input.panelWidthMm, species: input.species, sawn: input.sawn, climate: input.climate });
-  // toFixed keeps 300 / 100 from counting as 3.0000000001 boards.
-  const boardCount = Math.max(1, Math.ceil(Number((input.panelWidthMm / input.maxBoardWidthMm).toFixed(9))));
-  const boardWidthsMm =
-    input.arrangement === 'equal'
-      ? Array.from({ length: boardCount }, () => input.panelWidthMm / boardCount)
-      : widestInMiddle(input.panelWidthMm, input.maxBoardWidthMm, boardCount);
   return {
-    boardCount,
+    boardCount: boardWidthsMm.length,
     boardWidthsMm,
     boardWidths: boardWidthsMm.map((width) => dual(width)),
     arrangement: input.arrangement,
     movement,
     note: 'Widths are finished sizes; add jointing and ripping allowance to each board. The panel moves as one board of its full width.',
   };
+}
+
+/**
+ * Finished board widths (mm) of a {@link planGlueUp} plan, edge to edge across the panel,
+ * without its movement or display text: what the engine reads on every rebuild.
+ */
+export function glueUpBoardWidthsMm(input: Pick<GlueUpInput, 'panelWidthMm' | 'maxBoardWidthMm' | 'arrangement'>): number[] {
+  checkWidth(input.panelWidthMm, 'panelWidthMm');
+  checkWidth(input.maxBoardWidthMm, 'maxBoardWidthMm');
+  if (input.arrangement !== 'equal' && input.arrangement !== 'widest-middle') {
+    throw new InputError('arrangement', `must be equal or widest-middle (got "${String(input.arrangement)}")`, 'equal, widest-middle');
+  }
+  // toFixed keeps 300 / 100 from counting as 3.0000000001 boards.
+  const boardCount = Math.max(1, Math.ceil(Number((input.panelWidthMm / input.maxBoardWidthMm).toFixed(9))));
+  return input.arrangement === 'equal'
+    ? Array.from({ length: boardCount }, () => input.panelWidthMm / boardCount)
+    : widestInMiddle(input.panelWidthMm, input.maxBoardWidthMm, boardCount);
 }
 
 // The middle board (or middle two, for an even count) takes the full board width; the others

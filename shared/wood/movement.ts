@@ -63,6 +63,12 @@ export interface WidthChange {
   note?: string;
 }
 
+/**
+ * The numbers of a {@link WidthChange} without its display text: what the engine reads on
+ * every rebuild, where formatting text nobody shows was a measurable share of its time.
+ */
+export type WidthChangeMm = Omit<WidthChange, 'changeIn' | 'change'>;
+
 /** Inputs for {@link seasonalSwing}. */
 export interface SeasonalSwingInput {
   /** Width across the grain at the build moisture content, mm. */
@@ -94,6 +100,15 @@ export interface SeasonalSwing {
   notes: string[];
 }
 
+/**
+ * The numbers of a {@link SeasonalSwing} without display text or the two changes' detail:
+ * what the engine reads on every rebuild.
+ */
+export type SeasonalSwingMm = Pick<
+  SeasonalSwing,
+  'shrinkMm' | 'swellMm' | 'totalMm' | 'widthAtDriestMm' | 'widthAtMostHumidMm' | 'withinPublishedRange' | 'approximate' | 'notes'
+>;
+
 /** The coefficient per 1 % MC for `sawn`: unknown sawing takes the larger, tangential. */
 export function coefficientFor(species: Species, sawn: Sawn): { coefficient: number; direction: 'tangential' | 'radial' } {
   checkSawn(sawn);
@@ -108,6 +123,17 @@ export function coefficientFor(species: Species, sawn: Sawn): { coefficient: num
  * to `toMcPercent` (%). WH2010 Eq. 13-2 within 6–14 %; the total-shrinkage form outside it.
  */
 export function widthChange(input: WidthChangeInput): WidthChange {
+  const c = widthChangeMm(input);
+  const out: WidthChange = {
+    changeMm: c.changeMm, changeIn: c.changeMm / MM_PER_INCH, change: signed(c.changeMm), direction: c.direction,
+    coefficient: c.coefficient, withinPublishedRange: c.withinPublishedRange, method: c.method, approximate: c.approximate,
+  };
+  if (c.note !== undefined) out.note = c.note;
+  return out;
+}
+
+/** {@link widthChange} without display text (mm, signed). */
+export function widthChangeMm(input: WidthChangeInput): WidthChangeMm {
   checkWidth(input.widthMm, 'widthMm');
   checkMc(input.fromMcPercent, 'fromMcPercent');
   checkMc(input.toMcPercent, 'toMcPercent');
@@ -116,10 +142,10 @@ export function widthChange(input: WidthChangeInput): WidthChange {
   const { fromMcPercent: from, toMcPercent: to, widthMm } = input;
   const approximate = isApproximate(species.source.coefficients);
 
-  const within = [from, to].every((mc) => mc >= LINEAR_RANGE.min && mc <= LINEAR_RANGE.max);
+  const within = from >= LINEAR_RANGE.min && from <= LINEAR_RANGE.max && to >= LINEAR_RANGE.min && to <= LINEAR_RANGE.max;
   if (within) {
     const changeMm = widthMm * coefficient * (to - from);
-    return result(changeMm, direction, coefficient, true, 'linear', approximate);
+    return numbers(changeMm, direction, coefficient, true, 'linear', approximate);
   }
 
   const shrinkagePercent = direction === 'radial' ? species.totalShrinkage.radialPercent : species.totalShrinkage.tangentialPercent;
@@ -129,10 +155,10 @@ export function widthChange(input: WidthChangeInput): WidthChange {
     `Outside ${LINEAR_RANGE.min}–${LINEAR_RANGE.max} % moisture content, where WH2010 Eq. 13-2 is published; ` +
     `used the total-shrinkage form with ${direction} shrinkage ${shrinkagePercent} % (WH2010 Table 4-3), approximate.`;
   // The form itself is recalled, not read in the source, so its result is always approximate.
-  return result(changeMm, direction, effective, false, 'total-shrinkage', true, note);
+  return numbers(changeMm, direction, effective, false, 'total-shrinkage', true, note);
 }
 
-function result(
+function numbers(
   changeMm: number,
   direction: WidthChange['direction'],
   coefficient: number,
@@ -140,10 +166,8 @@ function result(
   method: WidthChange['method'],
   approximate: boolean,
   note?: string,
-): WidthChange {
-  const cleanMm = changeMm === 0 ? 0 : changeMm;
-  const change = signed(cleanMm);
-  const out: WidthChange = { changeMm: cleanMm, changeIn: cleanMm / MM_PER_INCH, change, direction, coefficient, withinPublishedRange, method, approximate };
+): WidthChangeMm {
+  const out: WidthChangeMm = { changeMm: changeMm === 0 ? 0 : changeMm, direction, coefficient, withinPublishedRange, method, approximate };
   if (note !== undefined) out.note = note;
   return out;
 }
@@ -157,24 +181,41 @@ export function seasonalSwing(input: SeasonalSwingInput): SeasonalSwing {
   const base = { widthMm: input.widthMm, species: input.species, sawn: input.sawn, fromMcPercent: climate.buildMcPercent };
   const toDriest = widthChange({ ...base, toMcPercent: climate.lowMcPercent });
   const toMostHumid = widthChange({ ...base, toMcPercent: climate.highMcPercent });
-
-  const shrinkMm = Math.max(0, -toDriest.changeMm);
-  const swellMm = Math.max(0, toMostHumid.changeMm);
-  const totalMm = toMostHumid.changeMm - toDriest.changeMm;
-  const notes: string[] = [];
-  for (const change of [toDriest, toMostHumid]) if (change.note && !notes.includes(change.note)) notes.push(change.note);
-  if (climate.buildMcPercent < climate.lowMcPercent) notes.push('Built drier than its driest season: the part only swells in service.');
-  if (climate.buildMcPercent > climate.highMcPercent) notes.push('Built wetter than its most humid season: the part only shrinks in service.');
-
+  const s = swingOf(input.widthMm, climate, toDriest, toMostHumid);
   return {
-    shrinkMm, shrinkIn: shrinkMm / MM_PER_INCH,
-    swellMm, swellIn: swellMm / MM_PER_INCH,
-    totalMm, totalIn: totalMm / MM_PER_INCH,
-    widthAtDriestMm: input.widthMm + toDriest.changeMm,
-    widthAtMostHumidMm: input.widthMm + toMostHumid.changeMm,
-    text: { shrink: dual(shrinkMm, MOVE_DISPLAY), swell: dual(swellMm, MOVE_DISPLAY), total: dual(totalMm, MOVE_DISPLAY) },
+    shrinkMm: s.shrinkMm, shrinkIn: s.shrinkMm / MM_PER_INCH,
+    swellMm: s.swellMm, swellIn: s.swellMm / MM_PER_INCH,
+    totalMm: s.totalMm, totalIn: s.totalMm / MM_PER_INCH,
+    widthAtDriestMm: s.widthAtDriestMm,
+    widthAtMostHumidMm: s.widthAtMostHumidMm,
+    text: { shrink: dual(s.shrinkMm, MOVE_DISPLAY), swell: dual(s.swellMm, MOVE_DISPLAY), total: dual(s.totalMm, MOVE_DISPLAY) },
     toDriest,
     toMostHumid,
+    withinPublishedRange: s.withinPublishedRange,
+    approximate: s.approximate,
+    notes: s.notes,
+  };
+}
+
+/** {@link seasonalSwing} without display text (mm). */
+export function seasonalSwingMm(input: SeasonalSwingInput): SeasonalSwingMm {
+  const climate = checkClimate(input.climate);
+  const base = { widthMm: input.widthMm, species: input.species, sawn: input.sawn, fromMcPercent: climate.buildMcPercent };
+  return swingOf(input.widthMm, climate, widthChangeMm({ ...base, toMcPercent: climate.lowMcPercent }), widthChangeMm({ ...base, toMcPercent: climate.highMcPercent }));
+}
+
+function swingOf(widthMm: number, climate: Climate, toDriest: WidthChangeMm, toMostHumid: WidthChangeMm): SeasonalSwingMm {
+  const notes: string[] = [];
+  if (toDriest.note) notes.push(toDriest.note);
+  if (toMostHumid.note && toMostHumid.note !== toDriest.note) notes.push(toMostHumid.note);
+  if (climate.buildMcPercent < climate.lowMcPercent) notes.push('Built drier than its driest season: the part only swells in service.');
+  if (climate.buildMcPercent > climate.highMcPercent) notes.push('Built wetter than its most humid season: the part only shrinks in service.');
+  return {
+    shrinkMm: Math.max(0, -toDriest.changeMm),
+    swellMm: Math.max(0, toMostHumid.changeMm),
+    totalMm: toMostHumid.changeMm - toDriest.changeMm,
+    widthAtDriestMm: widthMm + toDriest.changeMm,
+    widthAtMostHumidMm: widthMm + toMostHumid.changeMm,
     withinPublishedRange: toDriest.withinPublishedRange && toMostHumid.withinPublishedRange,
     approximate: toDriest.approximate || toMostHumid.approximate,
     notes,

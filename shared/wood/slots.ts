@@ -8,7 +8,7 @@ import { InputError } from '../errors.ts';
 import { dual, type DualLength } from '../units/dual.ts';
 import { MM_PER_INCH } from '../units/length.ts';
 import { checkClimate, type Climate } from './climate.ts';
-import { checkWidth, seasonalSwing, type Sawn } from './movement.ts';
+import { checkWidth, seasonalSwingMm, type Sawn } from './movement.ts';
 import type { SpeciesInput } from './resolve.ts';
 
 /**
@@ -55,8 +55,31 @@ export interface FastenerSlot {
   approximate: boolean;
 }
 
+/**
+ * The numbers of a {@link FastenerSlot} without display text: what the engine reads on every
+ * rebuild.
+ */
+export type FastenerSlotMm = Omit<FastenerSlot, 'slotLengthIn' | 'slotLength' | 'text'>;
+
 /** Slot length (mm) for a screw `distanceFromFixedLineMm` from the line where the top is fixed. */
 export function fastenerSlotLength(input: FastenerSlotInput): FastenerSlot {
+  const s = fastenerSlotMm(input);
+  return {
+    distanceFromFixedLineMm: s.distanceFromFixedLineMm,
+    slotLengthMm: s.slotLengthMm,
+    slotLengthIn: s.slotLengthMm / MM_PER_INCH,
+    slotLength: dual(s.slotLengthMm, { inchPrecision: 32, mmPrecision: 0.5 }),
+    travelTowardFixedLineMm: s.travelTowardFixedLineMm,
+    travelAwayMm: s.travelAwayMm,
+    screwFromNearEndMm: s.screwFromNearEndMm,
+    text: { travelToward: dual(s.travelTowardFixedLineMm, SHOW), travelAway: dual(s.travelAwayMm, SHOW), screwFromNearEnd: dual(s.screwFromNearEndMm, SHOW) },
+    needsSlot: s.needsSlot,
+    approximate: s.approximate,
+  };
+}
+
+/** {@link fastenerSlotLength} without display text (mm). */
+export function fastenerSlotMm(input: FastenerSlotInput): FastenerSlotMm {
   const distance = input.distanceFromFixedLineMm;
   if (typeof distance !== 'number' || !Number.isFinite(distance) || distance < 0) {
     throw new InputError('distanceFromFixedLineMm', `must be 0 mm or more (got ${String(distance)})`, 'at least 0');
@@ -67,20 +90,15 @@ export function fastenerSlotLength(input: FastenerSlotInput): FastenerSlot {
     throw new InputError('endClearanceMm', `must be 0 mm or more (got ${endClearanceMm})`, 'at least 0');
   }
   const climate = checkClimate(input.climate);
-  const swing = distance > 0 ? seasonalSwing({ widthMm: distance, species: input.species, sawn: input.sawn, climate }) : null;
+  const swing = distance > 0 ? seasonalSwingMm({ widthMm: distance, species: input.species, sawn: input.sawn, climate }) : null;
   const toward = swing?.shrinkMm ?? 0;
   const away = swing?.swellMm ?? 0;
-  const slotLengthMm = input.shankDiameterMm + toward + away + 2 * endClearanceMm;
-  const screwFromNearEndMm = endClearanceMm + toward + input.shankDiameterMm / 2;
   return {
     distanceFromFixedLineMm: distance,
-    slotLengthMm,
-    slotLengthIn: slotLengthMm / MM_PER_INCH,
-    slotLength: dual(slotLengthMm, { inchPrecision: 32, mmPrecision: 0.5 }),
+    slotLengthMm: input.shankDiameterMm + toward + away + 2 * endClearanceMm,
     travelTowardFixedLineMm: toward,
     travelAwayMm: away,
-    screwFromNearEndMm,
-    text: { travelToward: dual(toward, SHOW), travelAway: dual(away, SHOW), screwFromNearEnd: dual(screwFromNearEndMm, SHOW) },
+    screwFromNearEndMm: endClearanceMm + toward + input.shankDiameterMm / 2,
     needsSlot: toward + away > 2 * endClearanceMm,
     approximate: swing?.approximate ?? false,
   };

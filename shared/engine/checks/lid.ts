@@ -1,5 +1,5 @@
 /** Checks on the lid: hinge recesses, batten slots, and how far the lid moves. */
-import type { SeasonalSwing } from '../../wood/movement.ts';
+import type { SeasonalSwingMm } from '../../wood/movement.ts';
 import type { Check } from '../types.ts';
 import { both, check } from './check.ts';
 
@@ -16,7 +16,7 @@ export function hingeRecessCheck(partIds: readonly string[], recess: string, lea
 }
 
 /** Battens screwed through round holes fight the lid's movement across its grain. */
-export function battenSlotCheck(partIds: readonly string[], battenCount: number, slots: boolean, lidDepthMm: number, swing: SeasonalSwing, longestSlotMm: number): Check[] {
+export function battenSlotCheck(partIds: readonly string[], battenCount: number, slots: boolean, lidDepthMm: number, swing: SeasonalSwingMm, longestSlotMm: number): Check[] {
   const numbers = { lidDepthMm, swellMm: swing.swellMm, shrinkMm: swing.shrinkMm, totalMovementMm: swing.totalMm, longestSlotMm };
   if (battenCount === 0) {
     return [check({

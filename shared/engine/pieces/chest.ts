@@ -9,10 +9,10 @@
  * `height` above the floor; the lid's overhangs add to the width and depth.
  */
 import { DEFAULT_CLIMATE } from '../../wood/climate.ts';
-import { planGlueUp } from '../../wood/glueUp.ts';
-import { seasonalSwing } from '../../wood/movement.ts';
+import { glueUpBoardWidthsMm } from '../../wood/glueUp.ts';
+import { seasonalSwingMm } from '../../wood/movement.ts';
 import { getSheetGood } from '../../wood/sheetGoods.ts';
-import { fastenerSlotLength } from '../../wood/slots.ts';
+import { fastenerSlotMm } from '../../wood/slots.ts';
 import { getSpecies } from '../../wood/species.ts';
 import { assemble, type JointDraft, type PartDraft } from '../assembly.ts';
 import { bottomOnCleats } from '../constructions/bottomOnCleats.ts';
@@ -142,20 +142,20 @@ export function buildChest(spec: PieceSpec): ChestBuild {
 
   // Lid: glued up from boards, fixed at the hinge line so the hinges stay put; the front moves.
   const lidSize = boxSize(lay.lidBox);
-  const glue = planGlueUp({ panelWidthMm: lidSize[1], maxBoardWidthMm: p.lidBoardWidth, arrangement: 'equal', species: species.id, sawn: 'unknown', climate });
+  const lidBoardWidthsMm = glueUpBoardWidthsMm({ panelWidthMm: lidSize[1], maxBoardWidthMm: p.lidBoardWidth, arrangement: 'equal' });
   const battenLength = lay.battenYRange[1] - lay.battenYRange[0];
   const screwCount = Math.max(2, Math.ceil((battenLength - 2 * BATTEN_SCREW_INSET_MM) / BATTEN_SCREW_SPACING_MM) + 1);
   const screws: BattenScrew[] = Array.from({ length: screwCount }, (_, i) => {
     const y = lay.battenYRange[1] - BATTEN_SCREW_INSET_MM - ((battenLength - 2 * BATTEN_SCREW_INSET_MM) * i) / (screwCount - 1);
     const distance = Math.max(0, lay.hingeLineYMm - y);
     if (!p.battenSlots) return { yMm: y, distanceFromFixedLineMm: distance, slotLengthMm: p.screwDiameter, screwFromNearEndMm: p.screwDiameter / 2 };
-    const slot = fastenerSlotLength({ distanceFromFixedLineMm: distance, species: species.id, sawn: 'unknown', climate, shankDiameterMm: p.screwDiameter });
+    const slot = fastenerSlotMm({ distanceFromFixedLineMm: distance, species: species.id, sawn: 'unknown', climate, shankDiameterMm: p.screwDiameter });
     return i === 0 || !slot.needsSlot
       ? { yMm: y, distanceFromFixedLineMm: distance, slotLengthMm: p.screwDiameter, screwFromNearEndMm: p.screwDiameter / 2 }
       : { yMm: y, distanceFromFixedLineMm: distance, slotLengthMm: slot.slotLengthMm, screwFromNearEndMm: slot.screwFromNearEndMm };
   });
   const lid = lidWithBattens({
-    box: lay.lidBox, material: solid, glueUp: { boards: glue.boardCount, boardWidthMm: glue.boardWidthsMm[0]! },
+    box: lay.lidBox, material: solid, glueUp: { boards: lidBoardWidthsMm.length, boardWidthMm: lidBoardWidthsMm[0]! },
     battens: { count: p.battenCount, widthMm: p.battenWidth, thicknessMm: p.battenThickness, yRange: lay.battenYRange, xRange: [L, p.width - L] },
     screws, screwDiameterMm: p.screwDiameter, hinges, backRail: walls.back.topRail, explodeMm,
   });
@@ -172,7 +172,7 @@ export function buildChest(spec: PieceSpec): ChestBuild {
   const stileIds = idsOf(wallList.flatMap((w) => w.drafts.filter((d) => d.role === 'stile')));
   const outerWall = (inset: number) => inset + (T - p.grooveWidth) / 2;
   const innerWall = (inset: number) => L - inset - (T + p.grooveWidth) / 2;
-  const lidSwing = seasonalSwing({ widthMm: lidSize[1], species: species.id, sawn: 'unknown', climate });
+  const lidSwing = seasonalSwingMm({ widthMm: lidSize[1], species: species.id, sawn: 'unknown', climate });
   const lidMassKg = (boxVolume(lay.lidBox) + lid.battens.reduce((s, b) => s + boxVolume(b.world), 0)) * 1e-9 * species.densityKgM3At12;
   const cogY = (() => {
     const items = [lay.lidBox, ...lid.battens.map((b) => b.world)];
