@@ -44,15 +44,23 @@ export function sheetFrame(spec: SheetSpec, info: TitleBlockInfo, sheetName: str
     const w = b.w * cell.share;
     if (i > 0) out.push({ type: 'segment', a: [x, top], b: [x, b.y + b.h], kind: 'thin' });
     out.push({ type: 'label', at: [x + 1.5, top + 3.6], text: cell.label, sizePt: 5, anchor: 'start', font: 'sans', accent: true });
-    out.push({ type: 'label', at: [x + 1.5, top + 10.5], text: fitText(cell.value, w - 3, cell.mono ? 8 : 8.5), sizePt: cell.mono ? 8 : 8.5, anchor: 'start', font: cell.mono ? 'mono' : 'sans', bold: i < 2 });
+    const fitted = fitText(cell.value, w - 3, cell.mono ? 8 : 8.5);
+    out.push({ type: 'label', at: [x + 1.5, top + 10.5], text: fitted.text, sizePt: fitted.sizePt, anchor: 'start', font: cell.mono ? 'mono' : 'sans', bold: i < 2 });
     x += w;
   });
   return out;
 }
 
-/** Shortens `text` with an ellipsis so it fits `widthMm` at `sizePt` (estimated widths). */
-function fitText(text: string, widthMm: number, sizePt: number): string {
-  const perChar = 0.6 * sizePt * (25.4 / 72);
-  const max = Math.max(4, Math.floor(widthMm / perChar));
-  return text.length <= max ? text : `${text.slice(0, max - 1)}…`;
+/** Smallest size a title-block value is set in before it is shortened, pt. */
+const MIN_VALUE_PT = 6;
+
+/**
+ * Fits `text` into `widthMm` (estimated widths): at `sizePt` if it fits, else at a smaller
+ * size down to 6 pt, and only then shortened with an ellipsis.
+ */
+function fitText(text: string, widthMm: number, sizePt: number): { text: string; sizePt: number } {
+  const maxChars = (pt: number) => Math.max(4, Math.floor(widthMm / (0.6 * pt * (25.4 / 72))));
+  for (let pt = sizePt; pt >= MIN_VALUE_PT; pt -= 0.5) if (text.length <= maxChars(pt)) return { text, sizePt: pt };
+  const max = maxChars(MIN_VALUE_PT);
+  return { text: `${text.slice(0, max - 1)}…`, sizePt: MIN_VALUE_PT };
 }

@@ -51,7 +51,8 @@ export function ExportMenu({ result, title, revision, dirty, workshopName }: {
   const panelId = useId();
   const busy = progress !== null;
   const sheetSize: PaperSize = size ?? (units === 'in' ? 'letter' : 'a4');
-  const revisionText = dirty ? `${revision} + unsaved changes` : String(revision);
+  // Short enough for the title block's revision cell.
+  const revisionText = dirty ? `${revision} draft` : String(revision);
   const stem = `${exportFileStem(title, revision)}${dirty ? '-unsaved' : ''}`;
 
   useEffect(() => {
@@ -128,12 +129,10 @@ export function ExportMenu({ result, title, revision, dirty, workshopName }: {
           <section aria-labelledby={`${panelId}-pdf`} className="space-y-2">
             <h2 id={`${panelId}-pdf`} className="font-semibold">Plan set (PDF)</h2>
             <div className="flex flex-wrap items-center gap-2">
-              <label className="flex items-center gap-1 text-xs text-graphite-soft">
-                Sheet
-                <select className="field w-auto py-0.5 font-sans text-xs" value={sheetSize} disabled={busy} onChange={(e) => setSize(e.target.value as PaperSize)}>
-                  {SIZES.map((s) => <option key={s.id} value={s.id}>{s.label}</option>)}
-                </select>
-              </label>
+              <label htmlFor={`${panelId}-size`} className="text-xs text-graphite-soft">Sheet</label>
+              <select id={`${panelId}-size`} className="field w-auto py-0.5 font-sans text-xs" value={sheetSize} disabled={busy} onChange={(e) => setSize(e.target.value as PaperSize)}>
+                {SIZES.map((s) => <option key={s.id} value={s.id}>{s.label}</option>)}
+              </select>
               <div className="flex overflow-hidden rounded-sm border border-graphite" role="radiogroup" aria-label="Orientation">
                 {(['landscape', 'portrait'] as const).map((o) => (
                   <button key={o} type="button" role="radio" aria-checked={orientation === o} disabled={busy} className={choice(orientation === o)} onClick={() => setOrientation(o)}>
@@ -177,7 +176,7 @@ export function ExportMenu({ result, title, revision, dirty, workshopName }: {
             </div>
             <p className="text-xs text-graphite-soft">
               Lengths in {units === 'in' ? 'inches' : 'millimetres'}; the spec JSON is always in millimetres.
-              {dirty && ' These files show your unsaved changes, not revision ' + revision + '.'}
+              {dirty && ` These files show your unsaved changes, marked “${revisionText}”, not revision ${revision} as saved.`}
             </p>
           </section>
 

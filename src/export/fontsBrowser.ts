@@ -1,24 +1,21 @@
 /**
- * JetBrains Mono for PDFs in the browser: the woff2 files the app already ships (through
- * @fontsource/jetbrains-mono), fetched and decompressed to TrueType with wawoff2, both loaded
- * only when a plan set is exported.
+ * JetBrains Mono for PDFs in the browser: the TrueType files the build decompressed from the
+ * woff2 the app already ships (scripts/vite/monoFontTtf.ts; the decompressor cannot run under
+ * the app's content security policy), fetched only when a plan set is exported.
  */
-import regularUrl from '@fontsource/jetbrains-mono/files/jetbrains-mono-latin-400-normal.woff2?url';
-import boldUrl from '@fontsource/jetbrains-mono/files/jetbrains-mono-latin-700-normal.woff2?url';
+import { boldUrl, regularUrl } from 'virtual:mono-font-ttf';
 import type { MonoFonts } from './planSetPdf.ts';
 
 let cached: Promise<MonoFonts> | null = null;
 
+async function fetchBytes(url: string): Promise<Uint8Array> {
+  const response = await fetch(url);
+  if (!response.ok) throw new Error(`could not load the dimension font (${response.status})`);
+  return new Uint8Array(await response.arrayBuffer());
+}
+
 async function load(): Promise<MonoFonts> {
-  const { default: decompress } = await import('wawoff2/decompress.js');
-  const fetchBytes = async (url: string): Promise<Uint8Array> => {
-    const response = await fetch(url);
-    if (!response.ok) throw new Error(`could not load the dimension font (${response.status})`);
-    return new Uint8Array(await response.arrayBuffer());
-  };
-  // One at a time, copying at once: the decompressor's result is a view into memory it reuses.
-  const regular = (await decompress(await fetchBytes(regularUrl))).slice();
-  const bold = (await decompress(await fetchBytes(boldUrl))).slice();
+  const [regular, bold] = await Promise.all([fetchBytes(regularUrl), fetchBytes(boldUrl)]);
   return { regular, bold };
 }
 
