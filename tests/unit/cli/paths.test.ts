@@ -3,13 +3,13 @@ import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { runCli } from '../../../server/cli/main.ts';
+import { captureCliOutput } from '../../support/cliOutput.ts';
 import { fromUserCwd } from '../../../server/cli/paths.ts';
 
 const FIXTURES = resolve('tests/fixtures');
 
 let userDir: string;
-let stdout = '';
-let stderr = '';
+const captured = captureCliOutput();
 
 beforeEach(() => {
   // A folder other than the repository, standing for where the user typed `npm run ...`.
@@ -18,20 +18,9 @@ beforeEach(() => {
   copyFileSync(join(FIXTURES, 'specs/chest-toy-maple.json'), join(userDir, 'specs/toy.json'));
   copyFileSync(join(FIXTURES, 'rooms/coastal-bedroom.json'), join(userDir, 'room.json'));
   vi.stubEnv('INIT_CWD', userDir);
-  stdout = '';
-  stderr = '';
-  vi.spyOn(process.stdout, 'write').mockImplementation((chunk: string | Uint8Array) => {
-    stdout += String(chunk);
-    return true;
-  });
-  vi.spyOn(process.stderr, 'write').mockImplementation((chunk: string | Uint8Array) => {
-    stderr += String(chunk);
-    return true;
-  });
 });
 
 afterEach(() => {
-  vi.restoreAllMocks();
   vi.unstubAllEnvs();
   rmSync(userDir, { recursive: true, force: true });
 });
@@ -51,8 +40,8 @@ describe('fromUserCwd', () => {
 describe('casewright commands with relative paths', () => {
   it('cutlist reads a spec file relative to where the user ran npm', async () => {
     expect(await runCli(['cutlist', 'specs/toy.json', '--json'])).toBe(0);
-    expect(stderr).toBe('');
-    expect((JSON.parse(stdout) as { piece: { kind: string } }).piece.kind).toBe('chest');
+    expect(captured.stderr).toBe('');
+    expect((JSON.parse(captured.stdout) as { piece: { kind: string } }).piece.kind).toBe('chest');
   });
 
   it('plan writes --out beside the user, not in the repository', async () => {
@@ -65,17 +54,17 @@ describe('casewright commands with relative paths', () => {
   it('layout reads --parts relative to the user', async () => {
     writeFileSync(join(userDir, 'parts.csv'), 'name,quantity,length,width,thickness,material\nShelf,2,30in,11in,1/2in,hardwood-plywood-1/2\n');
     expect(await runCli(['layout', '--parts', 'parts.csv', '--json'])).toBe(0);
-    expect(stderr).toBe('');
-    expect(stdout).toContain('Shelf');
+    expect(captured.stderr).toBe('');
+    expect(captured.stdout).toContain('Shelf');
   });
 
   it('fit reads the spec and --room relative to the user', async () => {
     expect(await runCli(['fit', 'specs/toy.json', '--room', 'room.json', '--json'])).toBe(0);
-    expect(stderr).toBe('');
+    expect(captured.stderr).toBe('');
   });
 
   it('names the path as typed when the file is missing', async () => {
     expect(await runCli(['cutlist', 'specs/missing.json'])).toBe(2);
-    expect(stderr).toContain('"specs/missing.json"');
+    expect(captured.stderr).toContain('"specs/missing.json"');
   });
 });

@@ -1,32 +1,15 @@
-import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { runCli } from '../../../server/cli/main.ts';
+import { captureCliOutput } from '../../support/cliOutput.ts';
 
 const PERCENT_TOLERANCE = 0.2;
 
-let stdout = '';
-let stderr = '';
-
-beforeEach(() => {
-  stdout = '';
-  stderr = '';
-  vi.spyOn(process.stdout, 'write').mockImplementation((chunk: string | Uint8Array) => {
-    stdout += String(chunk);
-    return true;
-  });
-  vi.spyOn(process.stderr, 'write').mockImplementation((chunk: string | Uint8Array) => {
-    stderr += String(chunk);
-    return true;
-  });
-});
-
-afterEach(() => {
-  vi.restoreAllMocks();
-});
+const captured = captureCliOutput();
 
 async function json(args: string[]): Promise<Record<string, unknown>> {
   const code = await runCli([...args, '--json']);
   expect(code).toBe(0);
-  return JSON.parse(stdout) as Record<string, unknown>;
+  return JSON.parse(captured.stdout) as Record<string, unknown>;
 }
 
 describe('casewright emc', () => {
@@ -45,7 +28,7 @@ describe('casewright emc', () => {
 
   it('prints a sentence for a person without --json', async () => {
     expect(await runCli(['emc', '--temp', '70F', '--rh', '50'])).toBe(0);
-    expect(stdout).toContain('Equilibrium moisture content at 70 °F (21.1 °C) and 50 % RH: 9.2 %');
+    expect(captured.stdout).toContain('Equilibrium moisture content at 70 °F (21.1 °C) and 50 % RH: 9.2 %');
   });
 
   it('solves for the humidity when given --mc', async () => {
@@ -56,8 +39,8 @@ describe('casewright emc', () => {
 
   it('refuses a temperature without its unit, exit code 2', async () => {
     expect(await runCli(['emc', '--temp', '70', '--rh', '50'])).toBe(2);
-    expect(stderr).toMatch(/--temp: "70" has no unit/);
-    expect(stdout).toBe('');
+    expect(captured.stderr).toMatch(/--temp: "70" has no unit/);
+    expect(captured.stdout).toBe('');
   });
 });
 
@@ -78,12 +61,12 @@ describe('casewright movement', () => {
 
   it('names the option and the valid species for an unknown species', async () => {
     expect(await runCli(['movement', '--species', 'teak', '--width', '15in', '--from-mc', '8', '--to-mc', '12'])).toBe(2);
-    expect(stderr).toMatch(/--species: unknown species "teak"; choose one of: .*white-oak/);
+    expect(captured.stderr).toMatch(/--species: unknown species "teak"; choose one of: .*white-oak/);
   });
 
   it('names the option for a zero denominator', async () => {
     expect(await runCli(['movement', '--species', 'white-oak', '--width', '3/0in', '--from-mc', '8', '--to-mc', '12'])).toBe(2);
-    expect(stderr).toMatch(/--width: .*zero denominator/);
+    expect(captured.stderr).toMatch(/--width: .*zero denominator/);
   });
 });
 
@@ -108,12 +91,12 @@ describe('casewright float', () => {
 
   it('names the low moisture-content option when it is above the high', async () => {
     expect(await runCli([...cherry.slice(0, 9), '--low-mc', '12', '--high-mc', '11'])).toBe(2);
-    expect(stderr).toMatch(/--low-mc: /);
+    expect(captured.stderr).toMatch(/--low-mc: /);
   });
 
   it('prints lines for a person without --json', async () => {
     expect(await runCli(cherry)).toBe(0);
-    expect(stdout).toMatch(/Gap each side at build: 3\/32" \(2\.6 mm\)/);
-    expect(stdout).toMatch(/Check: ok/);
+    expect(captured.stdout).toMatch(/Gap each side at build: 3\/32" \(2\.6 mm\)/);
+    expect(captured.stdout).toMatch(/Check: ok/);
   });
 });

@@ -1,28 +1,11 @@
-import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { runCli } from '../../../server/cli/main.ts';
+import { captureCliOutput } from '../../support/cliOutput.ts';
 
 const ROOM = 'tests/fixtures/rooms/coastal-bedroom.json';
 const SPEC = 'tests/fixtures/specs/chest-blanket-coastal.json';
 
-let stdout = '';
-let stderr = '';
-
-beforeEach(() => {
-  stdout = '';
-  stderr = '';
-  vi.spyOn(process.stdout, 'write').mockImplementation((chunk: string | Uint8Array) => {
-    stdout += String(chunk);
-    return true;
-  });
-  vi.spyOn(process.stderr, 'write').mockImplementation((chunk: string | Uint8Array) => {
-    stderr += String(chunk);
-    return true;
-  });
-});
-
-afterEach(() => {
-  vi.restoreAllMocks();
-});
+const captured = captureCliOutput();
 
 interface FitJson {
   passed: boolean;
@@ -35,16 +18,16 @@ describe('casewright fit', () => {
   it('prints every check for the demo chest in the coastal bedroom, the lid failing at the sill', async () => {
     const code = await runCli(['fit', SPEC, '--room', ROOM]);
     expect(code).toBe(0);
-    expect(stdout).toContain('[pass] Footprint');
-    expect(stdout).toContain('[error] Lid open: The lid meets the window sill (sea)');
-    expect(stdout).toContain('[pass] Through door hall');
-    expect(stdout).toContain('[pass] Walkway in front');
+    expect(captured.stdout).toContain('[pass] Footprint');
+    expect(captured.stdout).toContain('[error] Lid open: The lid meets the window sill (sea)');
+    expect(captured.stdout).toContain('[pass] Through door hall');
+    expect(captured.stdout).toContain('[pass] Walkway in front');
   });
 
   it('proposes a size that passes every check with --fit-niche --json', async () => {
     const code = await runCli(['fit', SPEC, '--room', ROOM, '--fit-niche', '--json']);
     expect(code).toBe(0);
-    const out = JSON.parse(stdout) as FitJson;
+    const out = JSON.parse(captured.stdout) as FitJson;
     expect(out.passed).toBe(false);
     expect(out.checks.find((c) => c.id === 'lid-open')?.passed).toBe(false);
     expect(out.scene.lid?.contactDeg).toBeGreaterThan(0);
@@ -56,19 +39,19 @@ describe('casewright fit', () => {
   it('exits 2 naming the room field when the room file is wrong', async () => {
     const code = await runCli(['fit', 'chest', '--room', 'tests/fixtures/rooms/does-not-exist.json']);
     expect(code).toBe(2);
-    expect(stdout).toBe('');
-    expect(stderr).toContain('--room');
+    expect(captured.stdout).toBe('');
+    expect(captured.stderr).toContain('--room');
   });
 
   it('exits 2 when there is no room at all', async () => {
     const code = await runCli(['fit', 'chest']);
     expect(code).toBe(2);
-    expect(stderr).toContain('--room: is required');
+    expect(captured.stderr).toContain('--room: is required');
   });
 
   it('refuses an unknown pinned size', async () => {
     const code = await runCli(['fit', 'chest', '--room', ROOM, '--fit-niche', '--pin', 'length']);
     expect(code).toBe(2);
-    expect(stderr).toContain('--pin');
+    expect(captured.stderr).toContain('--pin');
   });
 });
