@@ -7,6 +7,7 @@
 import type { JointDraft, PartDraft } from '../assembly.ts';
 import { boxBetween } from '../geometry/box.ts';
 import type { Box3, Material } from '../types.ts';
+import { drawerNamer } from './drawerBox.ts';
 import { fixedName, plainPart } from './plainPart.ts';
 
 /** Options for {@link faceFrame}; world coordinates, mm. */
@@ -60,9 +61,9 @@ export function faceFrame(o: FaceFrameOptions): FaceFrame {
   }));
 
   const mullions = rows.flatMap((row, r) => o.columns.slice(1).map((col, c) => plainPart({
-    group: 'face-frame/mullion', member: `mullion-${r}-${c}`, label: `face-frame mullion, row ${r + 1}`, role: 'face-frame', material: o.material, grain: 'length',
+    group: 'face-frame/mullion', member: `row-${r + 1}`, label: `face-frame mullion, row ${r + 1}`, role: 'face-frame', material: o.material, grain: 'length',
     world: boxBetween([o.columns[c]![1], y0, row[0]], [col[0], y1, row[1]]), axes: { length: '+Z', width: '+X', thickness: '+Y' },
-    explodeMm: out, name: fixedName('face-frame-mullion', 'Face-frame mullion'),
+    explodeMm: out, name: drawerNamer('face-frame-mullion', 'Face-frame mullion'),
   })));
 
   const joints: JointDraft[] = [];

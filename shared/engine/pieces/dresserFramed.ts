@@ -17,7 +17,7 @@ import { cornerLegs } from '../constructions/cornerLegs.ts';
 import { drawerBox, drawerNamer } from '../constructions/drawerBox.ts';
 import { frameAndPanelFace, type FacePanelSpec } from '../constructions/frameAndPanelFace.ts';
 import { frontGrid, type FrameWidths, type FrontGrid } from '../constructions/frontGrid.ts';
-import { fixedName, plainPart } from '../constructions/plainPart.ts';
+import { plainPart } from '../constructions/plainPart.ts';
 import { SLIDE_RULES } from '../constructions/slides.ts';
 import { webFrame } from '../constructions/webFrame.ts';
 import { boxBetween, boxSize, boxUnion } from '../geometry/box.ts';
@@ -223,9 +223,9 @@ export function buildFramedDresser(p: P, top: TopPlan, d: DrawerPlan, rows: numb
   // Mullions between drawers in a row, dowelled to the rails above and below.
   lay.grid.rows.forEach((row, ri) => lay.grid.columns.slice(1).forEach((col, ci) => {
     const m = plainPart({
-      group: 'mullion', member: `r${ri}c${ci}`, label: `mullion, row ${ri + 1}`, role: 'face-frame', material: solid, grain: 'length',
+      group: 'mullion', member: `row-${ri + 1}`, label: `mullion, row ${ri + 1}, ${ci + 1}`, role: 'face-frame', material: solid, grain: 'length',
       world: boxBetween([lay.grid.columns[ci]![1], 0, row[0]], [col[0], T, row[1]]), axes: { length: '+Z', width: '+X', thickness: '+Y' },
-      explodeMm: [0, -explodeMm * 0.5, 0], name: fixedName('mullion', 'Mullion'),
+      explodeMm: [0, -explodeMm * 0.5, 0], name: drawerNamer('mullion', 'Mullion'),
     });
     drafts.push(m);
     joints.push({ type: 'pocket-screw', a: { draft: m, featureIds: [] }, b: { draft: frames[ri]!.frontRail, featureIds: [] }, clearanceMm: 0, glued: true, floating: false, note: 'Dowelled and glued between the rails.' });

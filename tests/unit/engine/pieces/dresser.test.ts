@@ -34,7 +34,8 @@ describe('buildPiece (dresser), worked by hand', () => {
     within(part(r, 'case-side').lengthMm, 739.775);
     // Rows share 739.775 − 2 × 38.1 − 2 × 50.8 = 561.975 mm; h0 = (561.975 − 3 × 25.4) / 3 = 161.925.
     // Mullions fill each row's opening: 161.925, 187.325, 212.725 mm.
-    const mullions = r.parts.filter((p) => p.id.startsWith('face-frame-mullion')).map((p) => p.lengthMm).sort((a, b) => a - b);
+    const mullions = r.parts.filter((p) => p.id.startsWith('row-') && p.id.endsWith('face-frame-mullion')).map((p) => p.lengthMm).sort((a, b) => a - b);
+    expect(mullions).toHaveLength(3);
     [161.925, 187.325, 212.725].forEach((h, i) => within(mullions[i], h));
   });
 
@@ -200,7 +201,7 @@ describe('buildPiece (dresser) built like the chest', () => {
     // 56 − 3-1/2 + 7/8 = 53-3/8 in = 1355.725 mm.
     within(part(r, 'web-frame-front-rail').lengthMm, 1355.725);
     // Rows share 841.375 − 76.2 foot − 4 × 19.05 frames = 688.975; h0 = (688.975 − 76.2) / 3 = 204.258.
-    within(part(r, 'mullion').lengthMm, 204.258);
+    within(part(r, 'row-1-mullion').lengthMm, 204.258);
     // Inset front: 204.258 − 2 × 1.5875 = 201.083 tall.
     within(part(r, 'row-1-drawer-front').widthMm, 201.083);
   });
