@@ -10,6 +10,22 @@ const VERDICT = {
   passes: { label: 'Passes', cls: 'bg-ok-soft text-ok', order: 3 },
 } as const;
 
+/** Plain words for the numbers room fit reports whose engine names say little to a maker. */
+const LABELS: Readonly<Record<string, string>> = {
+  hingeYMm: 'hinge line from the front',
+  hingeZMm: 'hinge line height',
+  openAngleDeg: 'opens to',
+  contactDeg: 'meets it at',
+  pullOutMm: 'stand it out by',
+  swingRadiusMm: 'lid swing radius',
+  openReachMm: 'reach when open',
+  standoffMm: 'off the wall',
+  topMm: 'top of the piece',
+  smallestFaceMm: 'smallest face',
+  smallestFaceOtherMm: 'its other side',
+  standUpDiagonalMm: 'diagonal to stand it up',
+};
+
 function verdictOf(check: RoomCheck): keyof typeof VERDICT {
   if (check.passed) return 'passes';
   if (check.needsInput) return 'input';
@@ -36,7 +52,7 @@ export function RoomChecksList({ checks }: { checks: readonly RoomCheck[] }) {
                     const n = checkNumber(key, value, length);
                     return (
                       <div key={key} className="flex gap-1">
-                        <dt className="text-graphite-soft">{n.label}</dt>
+                        <dt className="text-graphite-soft">{LABELS[key] ?? n.label}</dt>
                         <dd className="dim">{n.text}</dd>
                       </div>
                     );

@@ -62,10 +62,10 @@ export function RoomForm({ state, placedLeftMm }: { state: RoomFormState; placed
       </p>
       <Section title="Room">
         <RoomTextField state={state} path={['name']} label="Name" placeholder="Room" />
-        <div className="grid grid-cols-3 gap-x-2">
+        <div className="grid grid-cols-2 gap-x-2 gap-y-1.5">
           <RoomLengthField state={state} path={['width']} label="Width (left–right)" />
           <RoomLengthField state={state} path={['depth']} label="Depth (front–back)" />
-          <RoomLengthField state={state} path={['ceiling']} label="Ceiling" />
+          <RoomLengthField state={state} path={['ceiling']} label="Ceiling height" />
         </div>
         <div className="grid grid-cols-2 gap-x-2">
           <RoomLengthField state={state} path={['baseboard', 'height']} label="Baseboard height" />
@@ -93,7 +93,7 @@ export function RoomForm({ state, placedLeftMm }: { state: RoomFormState; placed
         ) : (
           <div className="grid grid-cols-2 gap-x-2">
             <RoomChoiceField state={state} path={['placement', 'align']} label="In the niche, at its" choices={ALIGN_CHOICES} fallback="centre" />
-            <RoomLengthField state={state} path={['placement', 'near']} label="Niche around" optional={{ placeholder: 'mid-wall' }} />
+            <RoomLengthField state={state} path={['placement', 'near']} label="Niche near (from corner)" optional={{ placeholder: 'mid-wall' }} />
           </div>
         )}
         <div className="grid grid-cols-2 items-end gap-x-2">
