@@ -48,7 +48,10 @@ export function ParamField({ def, value, units, readOnly, engineError, onChange,
   const control = (() => {
     if (def.kind === 'enum' || def.kind === 'species' || def.kind === 'sheet') {
       return (
-        <select id={id} className="field font-sans" value={String(value)} disabled={readOnly} aria-describedby={describedBy} onChange={(e) => onChange(e.target.value, false)}>
+        <select id={id} className="field font-sans" value={String(value)} disabled={readOnly} aria-describedby={describedBy} onChange={(e) => {
+          performance.mark('param-change');
+          onChange(e.target.value, false);
+        }}>
           {choicesFor(def).map((choice) => (
             <option key={choice.value} value={choice.value}>
               {choice.label}
@@ -70,6 +73,7 @@ export function ParamField({ def, value, units, readOnly, engineError, onChange,
         aria-describedby={describedBy}
         onChange={(e) => {
           const text = e.target.value;
+          performance.mark('param-change');
           const result = parseFieldText(def, text, units);
           setDraft({ text, forValue: result.ok ? result.value : value });
           if (result.ok) onChange(result.value, true);

@@ -3,7 +3,7 @@ import { useFrame, useThree } from '@react-three/fiber';
 import { Vector3 } from 'three';
 import type { OrbitControls as OrbitControlsImpl } from 'three-stdlib';
 import type { Box3 } from '../../shared/engine/types.ts';
-import { presetCamera, type PresetView } from './cameraPresets.ts';
+import { fitCamera, presetCamera, type PresetView } from './cameraPresets.ts';
 
 /** How quickly the camera closes on a preset: the remaining distance shrinks by e every 1/RATE s. */
 const APPROACH_RATE_PER_S = 7;
@@ -12,11 +12,13 @@ const SETTLED_M = 1e-4;
 
 /**
  * Moves the camera to the preset `view`, framed on `bounds`: a jump the first time, a short
- * glide after. Mutates the camera and controls in `useFrame` only while gliding (no React state
- * per frame) and marks the canvas `data-camera-settled` so tests know when to look.
+ * glide after. A new `fitKey` (the explode amount) glides to frame `bounds` again from wherever
+ * the maker is looking, so an exploded lid stays in view. Mutates the camera and controls in
+ * `useFrame` only while gliding (no React state per frame) and marks the canvas
+ * `data-camera-settled` so tests know when to look.
  */
-export function CameraRig(props: { view: PresetView; bounds: Box3; framingKey: string }) {
-  const { view, bounds, framingKey } = props;
+export function CameraRig(props: { view: PresetView; bounds: Box3; framingKey: string; fitKey?: string }) {
+  const { view, bounds, framingKey, fitKey = '' } = props;
   const camera = useThree((s) => s.camera);
   const controls = useThree((s) => s.controls) as OrbitControlsImpl | null;
   const invalidate = useThree((s) => s.invalidate);
@@ -48,6 +50,19 @@ export function CameraRig(props: { view: PresetView; bounds: Box3; framingKey: s
     }
     invalidate();
   }, [view, framingKey, controls, camera, canvas, invalidate]);
+
+  const lastFit = useRef(fitKey);
+  useEffect(() => {
+    if (!controls || !placed.current || lastFit.current === fitKey) return;
+    lastFit.current = fitKey;
+    // From where the camera stands now (or is gliding to), toward the camera.
+    const from = goal.current ?? { position: camera.position, target: controls.target };
+    const direction = from.position.clone().sub(from.target);
+    const fit = fitCamera([direction.x, direction.y, direction.z], boundsRef.current, aspectRef.current);
+    goal.current = { position: new Vector3(...fit.position), target: new Vector3(...fit.target) };
+    canvas.dataset.cameraSettled = 'false';
+    invalidate();
+  }, [fitKey, controls, camera, canvas, invalidate]);
 
   useFrame((_, delta) => {
     const g = goal.current;

@@ -26,11 +26,16 @@
  *    lid and doors swung and drawers pulled to the positions the checks tested, and every part
  *    and room solid a check found meeting in pencil red. Presets frame the whole room; explode
  *    and the cut-away are set aside while the room is shown.
+ *  - `paintHex` (optional): the paint colour of a piece whose finish is paint; parts that take
+ *    paint (all but the drawer boxes) are drawn flat in it instead of their wood.
  *  - `className`: sizing of the wrapper; the canvas fills it.
  *
  * For tests: the wrapper is `[data-testid="piece-view"]` with `data-part-count` (instances drawn)
  * and `data-selected-part`; the canvas keeps its drawing buffer (pixels can be sampled) and
- * carries `data-camera-settled="true"` once a preset view has been reached.
+ * carries `data-camera-settled="true"` once a preset view has been reached, and
+ * `data-solids-ready="true"` once every part is drawn with its joinery cut (until then, after a
+ * change, changed parts show as plain boxes while their cut solids are built in idle time).
+ * Exploding refits the camera on the spread parts, keeping the direction it looks from.
  */
 import { useEffect, useMemo, useState } from 'react';
 import { Canvas, useThree } from '@react-three/fiber';
@@ -42,6 +47,7 @@ import { CAMERA_FOV_DEG, type PresetView } from './cameraPresets.ts';
 import { PartMesh } from './PartMesh.tsx';
 import { createPartSolidCache } from './partGeometry.ts';
 import { RoomLayer } from './RoomLayer.tsx';
+import { RenderMarks } from './RenderMarks.tsx';
 import { placeInRoom, type RoomSceneData } from './roomSceneModel.ts';
 import { ENGINE_TO_THREE_ROTATION_X, SCENE_SCALE } from './sceneFrame.ts';
 import { sceneModel } from './sceneModel.ts';
@@ -49,6 +55,8 @@ import { SectionCaps, sectionRenderOrder } from './SectionCaps.tsx';
 import { sectionHatches } from './sectionHatch.ts';
 import { keptBySection, sectionPlane, type Cutaway } from './sectionPlane.ts';
 import { PAPER_HEX, StageLights } from './StageLights.tsx';
+import { takesPaint } from '../editor/paintColours.ts';
+import { useIdleSolids } from './useIdleSolids.ts';
 import { createWoodMaterials, type Highlight } from './woodMaterials.ts';
 
 export type { PresetView } from './cameraPresets.ts';
@@ -65,6 +73,7 @@ export interface PieceViewProps {
   cutaway: null | Cutaway;
   view: PresetView;
   room?: RoomSceneData | null;
+  paintHex?: string | null;
   className?: string;
 }
 
@@ -104,7 +113,11 @@ function PieceScene(props: PieceViewProps) {
   const assembledBounds = useMemo(() => sceneModel(result, { explode: 0 }).bounds, [result]);
   const inRoom = useMemo(() => (room ? placeInRoom(pieceModel, room) : null), [pieceModel, room]);
   const meshes = inRoom ? inRoom.meshes : pieceModel.meshes;
-  const frameBounds = room ? room.roomBox : assembledBounds;
+  // Exploded, the parts spread past the assembled box (the lid rises off the top): frame what is drawn.
+  const frameBounds = room ? room.roomBox : explode > 0 ? pieceModel.bounds : assembledBounds;
+  // Cut solids come in idle time; until then a part is its plain box (typing never waits on CSG).
+  useIdleSolids(solids, result.parts);
+  const solidsReady = solids.pendingCount(result.parts) === 0;
   const partsById = useMemo(() => new Map(result.parts.map((p) => [p.id, p])), [result]);
   const hatches = useMemo(() => sectionHatches(result), [result]);
   // Free the solids of parts the new result no longer has (after it is drawn, never before).
@@ -135,12 +148,17 @@ function PieceScene(props: PieceViewProps) {
         {meshes.map((mesh, index) => {
           const part = partsById.get(mesh.partId)!;
           const highlight = highlightOf(mesh.partId);
+          const painted = Boolean(props.paintHex) && takesPaint(part.role);
           return (
             <PartMesh
               key={mesh.key}
               mesh={mesh}
-              solid={solids.get(part)}
-              material={materials.wood({ toneHex: mesh.toneHex, texture: mesh.materialKind === 'solid' ? 'grain' : 'sheet', highlight })}
+              solid={solids.peek(part) ?? solids.box(part)}
+              material={materials.wood({
+                toneHex: painted ? props.paintHex! : mesh.toneHex,
+                texture: painted || mesh.materialKind === 'sheet' ? 'sheet' : 'grain',
+                highlight,
+              })}
               outline={materials.outline(highlight)}
               section={section ? { back: materials.stencilCounter('back'), front: materials.stencilCounter('front'), renderOrder: sectionRenderOrder(index) } : null}
               isVisibleAt={isVisibleAt}
@@ -153,7 +171,8 @@ function PieceScene(props: PieceViewProps) {
       </group>
       {section && <SectionCaps plane={section} bounds={pieceModel.bounds} meshes={pieceModel.meshes} hatches={hatches} materials={materials} />}
       <OrbitControls makeDefault enableDamping={false} zoomToCursor />
-      <CameraRig view={view} bounds={frameBounds} framingKey={`${result.kind}|${room ? 'room' : 'piece'}`} />
+      <CameraRig view={view} bounds={frameBounds} framingKey={`${result.kind}|${room ? 'room' : 'piece'}`} fitKey={room ? 'room' : explode.toFixed(2)} />
+      <RenderMarks result={result} solidsReady={solidsReady} />
     </>
   );
 }

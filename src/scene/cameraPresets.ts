@@ -41,9 +41,21 @@ const unit = (a: Vec3): Vec3 => {
 export function presetCamera(view: PresetView, bounds: Box3, aspect = 1, fovDeg = CAMERA_FOV_DEG): { position: Vec3; target: Vec3 } {
   const d = DIRECTION[view];
   assert(d, `unknown preset view "${String(view)}"; use front, side, top or three-quarter`);
+  return fitCamera(d, bounds, aspect, fovDeg);
+}
+
+/**
+ * Camera position and target (m, three's world) looking from `direction` (toward the camera,
+ * three's world, any length) that frame `bounds` (engine mm): {@link presetCamera} for any
+ * direction, such as the one the maker has orbited to.
+ */
+export function fitCamera(direction: Vec3, bounds: Box3, aspect = 1, fovDeg = CAMERA_FOV_DEG): { position: Vec3; target: Vec3 } {
+  assert(Math.hypot(...direction) > 0, 'camera direction must not be zero');
   assert(aspect > 0 && Number.isFinite(aspect), `view aspect must be a positive number, got ${aspect}`);
-  const toward = unit(d);
-  const right = unit(cross([0, 1, 0], toward));
+  const toward = unit(direction);
+  // Straight down (or up) has no horizontal right-hand side; take the x axis.
+  const side = cross([0, 1, 0], toward);
+  const right = Math.hypot(...side) > 1e-9 ? unit(side) : ([1, 0, 0] as Vec3);
   const up = cross(toward, right);
   const lo = engineToThree(bounds.min);
   const hi = engineToThree(bounds.max);

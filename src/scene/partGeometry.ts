@@ -7,7 +7,7 @@
  */
 import { Matrix4, type BufferGeometry } from 'three';
 import type { Part, Placement, Vec3, WorldAxis } from '../../shared/engine/types.ts';
-import { buildPartSolid, partSolidKey } from './partSolid.ts';
+import { partSolidKey, partSolidSteps, plainPartSolid, plainSolidKey } from './partSolid.ts';
 
 const AXIS_INDEX = { X: 0, Y: 1, Z: 2 } as const;
 
@@ -64,14 +64,30 @@ export interface PartSolid {
  * of a part in one result gets the same objects without hashing), and a map on the part's shape
  * (size and cuts), so a new engine result whose rails did not change reuses the rails' solids
  * while the maker types. `retainOnly` frees the GPU-side buffers of solids no part uses any more.
+ *
+ * The cut solids (boolean operations) are the slow part of drawing a piece, so the view draws a
+ * part's plain box (`box`, cheap) until its cut solid is ready (`peek`), and builds the cut solids
+ * in idle time with `buildPending`, one boolean operation at a time.
  */
 export interface PartSolidCache {
+  /** The cut solid, built now if it is not yet (finishing a build `buildPending` began). */
   get(part: Part): PartSolid;
+  /** The cut solid if it is built, else null. */
+  peek(part: Part): PartSolid | null;
+  /** The part's plain box (no cuts), shared by every part of the same size and grain. */
+  box(part: Part): PartSolid;
+  /**
+   * Advances the builds of `parts`' missing cut solids, one boolean operation per step, while
+   * `hasTime()` says so (always at least one step); returns how many parts still wait.
+   */
+  buildPending(parts: readonly Part[], hasTime: () => boolean): number;
+  /** How many of `parts` have no cut solid yet. */
+  pendingCount(parts: readonly Part[]): number;
   /** Disposes every solid whose shape is not among `parts`; returns how many were freed. */
   retainOnly(parts: readonly Part[]): number;
   /** Disposes everything (on unmount). */
   dispose(): void;
-  /** Distinct solids held. */
+  /** Distinct cut solids held. */
   readonly size: number;
 }
 
@@ -79,6 +95,8 @@ export interface PartSolidCache {
 export function createPartSolidCache(): PartSolidCache {
   let byPart = new WeakMap<Part, PartSolid>();
   const byShape = new Map<string, PartSolid>();
+  const boxes = new Map<string, PartSolid>();
+  const building = new Map<string, Generator<void, PartSolid, void>>();
   const keyOf = new WeakMap<Part, string>();
   const shapeKey = (part: Part): string => {
     let key = keyOf.get(part);
@@ -92,18 +110,62 @@ export function createPartSolidCache(): PartSolidCache {
     solid.geometry.dispose();
     solid.edges.dispose();
   };
+  const peek = (part: Part): PartSolid | null => {
+    const known = byPart.get(part);
+    if (known) return known;
+    const solid = byShape.get(shapeKey(part));
+    if (solid) byPart.set(part, solid);
+    return solid ?? null;
+  };
+  /** One step of `part`'s build; true when its solid is done. */
+  const step = (part: Part): boolean => {
+    const key = shapeKey(part);
+    let steps = building.get(key);
+    if (!steps) {
+      steps = partSolidSteps(part);
+      building.set(key, steps);
+    }
+    const next = steps.next();
+    if (!next.done) return false;
+    building.delete(key);
+    byShape.set(key, next.value);
+    return true;
+  };
   return {
     get(part) {
-      const known = byPart.get(part);
+      const known = peek(part);
       if (known) return known;
-      const key = shapeKey(part);
-      let solid = byShape.get(key);
+      while (!step(part)) { /* finish it now */ }
+      return peek(part)!;
+    },
+    peek,
+    box(part) {
+      const key = plainSolidKey(part);
+      let solid = boxes.get(key);
       if (!solid) {
-        solid = buildPartSolid(part);
-        byShape.set(key, solid);
+        solid = plainPartSolid(part);
+        boxes.set(key, solid);
       }
-      byPart.set(part, solid);
       return solid;
+    },
+    buildPending(parts, hasTime) {
+      const waiting = parts.filter((part) => !peek(part));
+      let done = 0;
+      let first = true;
+      for (const part of waiting) {
+        while (first || hasTime()) {
+          first = false;
+          if (step(part)) {
+            done++;
+            break;
+          }
+        }
+        if (!hasTime()) break;
+      }
+      return waiting.length - done;
+    },
+    pendingCount(parts) {
+      return parts.filter((part) => !peek(part)).length;
     },
     retainOnly(parts) {
       const keep = new Set(parts.map(shapeKey));
@@ -114,13 +176,22 @@ export function createPartSolidCache(): PartSolidCache {
         byShape.delete(key);
         freed++;
       }
+      for (const key of building.keys()) if (!keep.has(key)) building.delete(key);
+      const keepBoxes = new Set(parts.map(plainSolidKey));
+      for (const [key, solid] of boxes) {
+        if (keepBoxes.has(key)) continue;
+        free(solid);
+        boxes.delete(key);
+      }
       // Parts of older results may still point at freed solids: forget them all.
       if (freed > 0) byPart = new WeakMap();
       return freed;
     },
     dispose() {
-      for (const solid of byShape.values()) free(solid);
+      for (const solid of [...byShape.values(), ...boxes.values()]) free(solid);
       byShape.clear();
+      boxes.clear();
+      building.clear();
       byPart = new WeakMap();
     },
     get size() {

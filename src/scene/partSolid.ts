@@ -20,6 +20,8 @@ const SURFACE_TOLERANCE_MM = 1e-6;
 export const GRAIN_TILE_ALONG_MM = 600;
 export const GRAIN_TILE_ACROSS_MM = 150;
 
+const round = (n: number): number => Math.round(n * 1e4) / 1e4;
+
 const size3 = (part: Part): [number, number, number] => [part.lengthMm, part.widthMm, part.thicknessMm];
 
 function boxBrush(box: Box3): Brush {
@@ -99,8 +101,13 @@ function withoutLeafSizeNotice<T>(run: () => T): T {
   }
 }
 
-/** The part's solid geometry in its local frame (mm), not cached: see `createPartSolidCache`. */
-export function buildPartGeometry(part: Part): BufferGeometry {
+/**
+ * The part's solid geometry in its local frame (mm), built one boolean operation per step: the
+ * generator yields after each cut so a caller can spread a part's cuts over idle time and never
+ * hold the page for a whole part (a cabinet side with rows of shelf-pin holes takes dozens of
+ * cuts). Not cached: see `createPartSolidCache`.
+ */
+export function* partGeometrySteps(part: Part): Generator<void, BufferGeometry, void> {
   const size = size3(part);
   const body = { min: [0, 0, 0], max: size } as const satisfies Box3;
   const cutters = part.features.flatMap((f) => f.removed).map((b) => cutterBox(b, size)).filter((b): b is Box3 => b !== null);
@@ -112,10 +119,12 @@ export function buildPartGeometry(part: Part): BufferGeometry {
     const evaluator = new Evaluator();
     evaluator.attributes = ['position', 'normal'];
     evaluator.useGroups = false;
-    withoutLeafSizeNotice(() => {
-      for (const cutter of cutters) solid = evaluator.evaluate(solid, boxBrush(cutter), SUBTRACTION);
-      for (const tongue of tongues) solid = evaluator.evaluate(solid, boxBrush(tongue), ADDITION);
-    });
+    const operations = [...cutters.map((box) => ({ box, op: SUBTRACTION })), ...tongues.map((box) => ({ box, op: ADDITION }))];
+    for (const { box, op } of operations) {
+      const before = solid;
+      solid = withoutLeafSizeNotice(() => evaluator.evaluate(before, boxBrush(box), op));
+      yield;
+    }
   }
   const geometry = solid.geometry;
   geometry.clearGroups();
@@ -125,13 +134,47 @@ export function buildPartGeometry(part: Part): BufferGeometry {
   return geometry;
 }
 
-/** The solid and its outline, for the cache. */
-export function buildPartSolid(part: Part): PartSolid {
-  const geometry = buildPartGeometry(part);
+/** Runs a stepwise build to its end at once. */
+function finish<T>(steps: Generator<void, T, void>): T {
+  let step = steps.next();
+  while (!step.done) step = steps.next();
+  return step.value;
+}
+
+/** The part's solid geometry in its local frame (mm), all cuts at once. */
+export function buildPartGeometry(part: Part): BufferGeometry {
+  return finish(partGeometrySteps(part));
+}
+
+/** The solid and its outline, one step per cut and one for the outline (see {@link partGeometrySteps}). */
+export function* partSolidSteps(part: Part): Generator<void, PartSolid, void> {
+  const geometry = yield* partGeometrySteps(part);
+  yield;
   return { geometry, edges: outlineEdges(geometry) };
 }
 
-const round = (n: number): number => Math.round(n * 1e4) / 1e4;
+/** The solid and its outline, for the cache. */
+export function buildPartSolid(part: Part): PartSolid {
+  return finish(partSolidSteps(part));
+}
+
+/**
+ * The part's finished box with no cuts, grain laid as on the real solid: what the view draws at
+ * once while the cut solid waits for idle time. A box's outline is its twelve edges.
+ */
+export function plainPartSolid(part: Part): PartSolid {
+  const [sx, sy, sz] = size3(part);
+  const geometry = new BoxGeometry(sx, sy, sz).translate(sx / 2, sy / 2, sz / 2);
+  writeGrainUvs(geometry, part.grain);
+  geometry.computeBoundingBox();
+  geometry.computeBoundingSphere();
+  return { geometry, edges: outlineEdges(geometry) };
+}
+
+/** What a part's plain box depends on: its size and grain. */
+export function plainSolidKey(part: Part): string {
+  return JSON.stringify([size3(part).map(round), part.grain]);
+}
 
 /** What the solid depends on — size, grain and cuts — as a string; equal keys give equal solids. */
 export function partSolidKey(part: Part): string {

@@ -87,13 +87,12 @@ async function look(): Promise<CanvasLook> {
 
 /** Mean difference (0–255) between two coarse pictures. */
 const difference = (a: CanvasLook, b: CanvasLook): number => a.thumb.reduce((sum, v, i) => sum + Math.abs(v - b.thumb[i]!), 0) / a.thumb.length;
-const inkArea = (l: CanvasLook): number => (l.inkBox.x1 - l.inkBox.x0) * (l.inkBox.y1 - l.inkBox.y0);
 
 /** Lets the view draw what the page just asked of it (it renders on demand, in software here). */
 async function settle() {
   const frames = () => page.evaluate(() => new Promise<void>((done) => requestAnimationFrame(() => requestAnimationFrame(() => setTimeout(done, 300)))));
   await frames();
-  await page.locator('canvas[data-camera-settled="true"]').waitFor({ timeout: 30_000 });
+  await page.locator('canvas[data-camera-settled="true"][data-solids-ready="true"]').waitFor({ timeout: 30_000 });
   await frames();
 }
 
@@ -159,15 +158,20 @@ describe('the 3D view in the design editor', { timeout: 300_000 }, () => {
     await page.waitForFunction((sel) => document.querySelector(sel)?.getAttribute('data-selected-part') === '', VIEW);
   });
 
-  it('spreads the parts apart when exploded', async () => {
+  it('spreads the parts apart when exploded, and keeps every part in view', async () => {
     await page.getByRole('button', { name: '¾' }).click();
     await settle();
     const before = await look();
     await page.getByRole('slider').first().fill('1');
     await settle();
     const exploded = await look();
-    expect(inkArea(exploded)).toBeGreaterThan(inkArea(before) * 1.1);
     await shot('scene-exploded');
+    expect(difference(exploded, before)).toBeGreaterThan(4);
+    // The camera refits on the spread parts: nothing (the lid above all) runs off an edge.
+    expect(exploded.inkBox.y0).toBeGreaterThan(0.01);
+    expect(exploded.inkBox.x0).toBeGreaterThan(0.01);
+    expect(exploded.inkBox.x1).toBeLessThan(0.99);
+    expect(exploded.inkBox.y1).toBeLessThan(0.99);
     await page.getByRole('slider').first().fill('0');
     await settle();
     expect(difference(await look(), before)).toBeLessThan(2);

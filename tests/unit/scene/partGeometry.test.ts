@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { Vector3, type BufferGeometry } from 'three';
 import { createPartSolidCache, placementMatrix } from '../../../src/scene/partGeometry.ts';
-import { buildPartGeometry, GRAIN_TILE_ALONG_MM, partSolidKey } from '../../../src/scene/partSolid.ts';
+import { buildPartGeometry, GRAIN_TILE_ALONG_MM, partSolidKey, plainPartSolid } from '../../../src/scene/partSolid.ts';
 import type { Box3, Part } from '../../../shared/engine/types.ts';
 import { GROOVE_Y, LEG, SPAN, frameSideResult } from './fixtures/frameSide.ts';
 
@@ -146,5 +146,44 @@ describe('createPartSolidCache', () => {
     expect(cache.size).toBe(result.parts.length);
     cache.dispose();
     expect(cache.size).toBe(0);
+  });
+
+  it('draws a plain box at once and builds the cut solid in steps, each call giving up when time runs out', () => {
+    const cache = createPartSolidCache();
+    const leg = partById('leg');
+    expect(cache.peek(leg)).toBeNull();
+    const box = cache.box(leg);
+    box.geometry.computeBoundingBox();
+    const size = box.geometry.boundingBox!.getSize(new Vector3());
+    expect(Math.abs(size.x - leg.lengthMm)).toBeLessThan(FLOAT32_MM);
+    expect(Math.abs(size.y - leg.widthMm)).toBeLessThan(FLOAT32_MM);
+    expect(Math.abs(meshVolume(box.geometry) - leg.lengthMm * leg.widthMm * leg.thicknessMm)).toBeLessThan(leg.lengthMm * leg.widthMm * leg.thicknessMm * VOLUME_RELATIVE_TOLERANCE);
+
+    // With no time at all, each call still takes one step: a part with cuts needs several calls.
+    let calls = 0;
+    while (cache.buildPending([leg], () => false) > 0) calls++;
+    expect(calls).toBeGreaterThan(0);
+    const solid = cache.peek(leg);
+    expect(solid).not.toBeNull();
+    expect(Math.abs(meshVolume(solid!.geometry) - expectedVolume(leg))).toBeLessThan(leg.lengthMm * leg.widthMm * leg.thicknessMm * VOLUME_RELATIVE_TOLERANCE);
+    expect(cache.get(leg)).toBe(solid);
+    cache.dispose();
+  });
+
+  it('builds every waiting part in one call when time allows, and counts none waiting after', () => {
+    const cache = createPartSolidCache();
+    expect(cache.pendingCount(result.parts)).toBe(result.parts.length);
+    expect(cache.buildPending(result.parts, () => true)).toBe(0);
+    expect(cache.pendingCount(result.parts)).toBe(0);
+    expect(cache.size).toBe(result.parts.length);
+    cache.dispose();
+  });
+
+  it('gives the plain box the grain coordinates the cut solid has', () => {
+    const rail = partById('top-rail');
+    const plain = plainPartSolid(rail);
+    expect(plain.geometry.getAttribute('uv')).toBeDefined();
+    plain.geometry.dispose();
+    plain.edges.dispose();
   });
 });
