@@ -1,7 +1,9 @@
 import { Component, lazy, Suspense, type ComponentType, type ReactNode } from 'react';
 import type { PieceResult } from '../../shared/engine/types.ts';
 import type { RoomScene } from '../../shared/room/roomScene.ts';
+import { paintColour } from '../editor/paintColours.ts';
 import { useEditorStore, type Cutaway, type ViewName } from '../state/useEditorStore.ts';
+import { usePaintView } from '../state/usePaintView.ts';
 
 /** What the 3D view takes (the contract of src/scene/PieceView.tsx). */
 interface PieceViewProps {
@@ -14,6 +16,7 @@ interface PieceViewProps {
   cutaway: Cutaway | null;
   view: ViewName;
   room?: RoomScene | null;
+  paintHex?: string | null;
   className?: string;
 }
 
@@ -35,6 +38,9 @@ export function SceneViewport({ result, stale, room = null }: { result: PieceRes
   const view = useEditorStore((s) => s.view);
   const select = useEditorStore((s) => s.select);
   const hover = useEditorStore((s) => s.hover);
+  // A painted piece is shown in the paint picked under the view (a view setting, not saved).
+  const paintId = usePaintView((s) => s.paintId);
+  const paintHex = result.spec.params.finish === 'paint' ? paintColour(paintId).hex : null;
   return (
     <div className="relative h-full w-full" aria-label="3D view of the piece" role="region">
       {PieceView ? (
@@ -50,6 +56,7 @@ export function SceneViewport({ result, stale, room = null }: { result: PieceRes
               cutaway={cutaway}
               view={view}
               room={room}
+              paintHex={paintHex}
               className="h-full w-full"
             />
           </Suspense>

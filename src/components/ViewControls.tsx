@@ -1,6 +1,8 @@
 import type { Vec3 } from '../../shared/engine/types.ts';
+import { PAINT_COLOURS } from '../editor/paintColours.ts';
 import { useEditorStore, type ViewName } from '../state/useEditorStore.ts';
 import { useLength } from '../state/useLength.ts';
+import { usePaintView } from '../state/usePaintView.ts';
 
 const VIEWS: { view: ViewName; label: string }[] = [
   { view: 'three-quarter', label: '¾' },
@@ -17,9 +19,12 @@ const AXES = [
 
 /**
  * Preset views, the explode slider and the cut-away plane, under the 3D view; with
- * `roomAvailable`, the switch that stands the piece in its room (explode and cut-away then rest).
+ * `roomAvailable`, the switch that stands the piece in its room (explode and cut-away then rest);
+ * with `painted` (the finish is paint), the colour the view paints it.
  */
-export function ViewControls({ bboxMin, bboxSize, roomAvailable = false }: { bboxMin: Vec3; bboxSize: Vec3; roomAvailable?: boolean }) {
+export function ViewControls({ bboxMin, bboxSize, roomAvailable = false, painted = false }: { bboxMin: Vec3; bboxSize: Vec3; roomAvailable?: boolean; painted?: boolean }) {
+  const paintId = usePaintView((s) => s.paintId);
+  const setPaint = usePaintView((s) => s.setPaint);
   const view = useEditorStore((s) => s.view);
   const inRoom = useEditorStore((s) => s.roomView) && roomAvailable;
   const explode = useEditorStore((s) => s.explode);
@@ -72,6 +77,15 @@ export function ViewControls({ bboxMin, bboxSize, roomAvailable = false }: { bbo
           </label>
         )}
       </div>
+      {painted && (
+        <label className="flex items-center gap-2">
+          <span className="text-graphite-soft">Paint</span>
+          <select aria-label="Paint colour" className="rounded-sm border border-rule bg-sheet px-1 py-0.5" value={paintId} onChange={(e) => setPaint(e.target.value)}>
+            {PAINT_COLOURS.map((p) => <option key={p.id} value={p.id}>{p.label}</option>)}
+          </select>
+          <span aria-hidden="true" className="inline-block h-3.5 w-3.5 rounded-sm border border-graphite/40" style={{ background: PAINT_COLOURS.find((p) => p.id === paintId)?.hex }} />
+        </label>
+      )}
     </div>
   );
 }

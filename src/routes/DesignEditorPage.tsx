@@ -179,7 +179,7 @@ function Editor({ design, role, workshops, approvals }: { design: DesignData; ro
                   </p>
                 )}
               </div>
-              <ViewControls bboxMin={result.bboxMinMm} bboxSize={result.bboxMm} roomAvailable={fitted !== null} />
+              <ViewControls bboxMin={result.bboxMinMm} bboxSize={result.bboxMm} roomAvailable={fitted !== null} painted={result.spec.params.finish === 'paint'} />
               <div className="flex min-h-[16rem] flex-1 flex-col overflow-hidden bg-sheet">
                 <ResultTables result={result} spec={spec} readOnly={!canEdit} design={design} />
               </div>
