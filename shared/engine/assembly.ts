@@ -5,7 +5,7 @@
  */
 import type { Box3, Feature, Grain, GlueUpPlan, Joint, JointType, Material, Part, PartRole, Placement, RoughSize, Vec3 } from './types.ts';
 import { describeFeature, type FeatureDraft } from './geometry/featureDescribe.ts';
-import { placeInto, type AxisMap } from './geometry/placement.ts';
+import { oppositeAxis, placeInto, type AxisMap } from './geometry/placement.ts';
 
 /** Id and maker's name for a set of identical instances, given their member names. */
 export type PartNamer = (members: readonly string[]) => { id: string; name: string };
@@ -93,8 +93,7 @@ function sameShape(a: ShapeKey, b: ShapeKey): boolean {
 
 /** The same part turned end for end about its thickness axis: still a rotation. */
 function turned(axes: AxisMap): AxisMap {
-  const flip = (a: AxisMap['length']) => `${a[0] === '+' ? '-' : '+'}${a[1]}` as AxisMap['length'];
-  return { length: flip(axes.length), width: flip(axes.width), thickness: axes.thickness };
+  return { length: oppositeAxis(axes.length), width: oppositeAxis(axes.width), thickness: axes.thickness };
 }
 
 /** Features of `draft` in its frame for `axes`, with templated ids filled in. */
@@ -127,7 +126,8 @@ function describeAll(draft: PartDraft, axes: AxisMap): { features: Feature[]; id
         id = fd.idTemplate.replace('{face}', feature.face).replace('{n}', String(n));
       }
       ids.set(fd.id, id);
-      if (id !== feature.id) described[i] = Object.assign({}, feature, { id });
+      // Made just above for this part alone, so it is named in place rather than copied.
+      feature.id = id;
     }
   }
   const features = described.sort((a, b) => (a.id < b.id ? -1 : a.id > b.id ? 1 : 0));

@@ -137,15 +137,18 @@ export function localFaceOf(axes: AxisMap, direction: WorldAxis): PartFace {
   throw new Error(`Assertion failed: no local axis maps to ${direction}`);
 }
 
+const OPPOSITE: Readonly<Record<WorldAxis, WorldAxis>> = { '+X': '-X', '-X': '+X', '+Y': '-Y', '-Y': '+Y', '+Z': '-Z', '-Z': '+Z' };
+
 /** The world direction opposite `axis`. */
 export function oppositeAxis(axis: WorldAxis): WorldAxis {
-  return `${axis[0] === '+' ? '-' : '+'}${axis[1]}` as WorldAxis;
+  return OPPOSITE[axis];
 }
 
-/** The unit vector of a signed world axis. */
+const UNIT: Readonly<Record<WorldAxis, Vec3>> = {
+  '+X': [1, 0, 0], '-X': [-1, 0, 0], '+Y': [0, 1, 0], '-Y': [0, -1, 0], '+Z': [0, 0, 1], '-Z': [0, 0, -1],
+};
+
+/** The unit vector of a signed world axis (shared and read-only). */
 export function axisVector(axis: WorldAxis): Vec3 {
-  const { index, sign } = parseAxis(axis);
-  const v: [number, number, number] = [0, 0, 0];
-  v[index] = sign;
-  return v;
+  return UNIT[axis];
 }

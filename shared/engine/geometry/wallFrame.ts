@@ -4,7 +4,7 @@
  * the world, so one construction serves the front, back and both sides of any piece.
  */
 import type { Box3, Vec3, WorldAxis } from '../types.ts';
-import { axisVector } from './placement.ts';
+import { axisVector, oppositeAxis } from './placement.ts';
 
 /** Where a wall's (u, v, w) axes sit in the world; v is always +Z. */
 export interface WallFrame {
@@ -29,23 +29,33 @@ export function wallPointToWorld(frame: WallFrame, p: Vec3): Vec3 {
 
 /** Maps a box in wall coordinates to its world box (mm). */
 export function wallBoxToWorld(frame: WallFrame, box: Box3): Box3 {
-  const a = wallPointToWorld(frame, box.min);
-  const b = wallPointToWorld(frame, box.max);
+  // wallPointToWorld for both corners, written out: this runs for every cut of every wall on
+  // each rebuild, and the corner arrays were garbage.
+  const o = frame.origin;
+  const u = axisVector(frame.u);
+  const w = axisVector(frame.w);
+  const p = box.min;
+  const q = box.max;
+  const ax = o[0] + p[0] * u[0] + p[2] * w[0];
+  const ay = o[1] + p[0] * u[1] + p[2] * w[1];
+  const az = o[2] + p[1] + p[0] * u[2] + p[2] * w[2];
+  const bx = o[0] + q[0] * u[0] + q[2] * w[0];
+  const by = o[1] + q[0] * u[1] + q[2] * w[1];
+  const bz = o[2] + q[1] + q[0] * u[2] + q[2] * w[2];
   return {
-    min: [Math.min(a[0], b[0]), Math.min(a[1], b[1]), Math.min(a[2], b[2])],
-    max: [Math.max(a[0], b[0]), Math.max(a[1], b[1]), Math.max(a[2], b[2])],
+    min: [Math.min(ax, bx), Math.min(ay, by), Math.min(az, bz)],
+    max: [Math.max(ax, bx), Math.max(ay, by), Math.max(az, bz)],
   };
 }
 
 /** The world direction of a wall direction. */
 export function wallDirToWorld(frame: WallFrame, dir: '+u' | '-u' | '+v' | '-v' | '+w' | '-w'): WorldAxis {
-  const flip = (axis: WorldAxis): WorldAxis => `${axis[0] === '+' ? '-' : '+'}${axis[1]}` as WorldAxis;
   switch (dir) {
     case '+u': return frame.u;
-    case '-u': return flip(frame.u);
+    case '-u': return oppositeAxis(frame.u);
     case '+v': return '+Z';
     case '-v': return '-Z';
     case '+w': return frame.w;
-    case '-w': return flip(frame.w);
+    case '-w': return oppositeAxis(frame.w);
   }
 }
