@@ -75,12 +75,13 @@ function checkValue(def: ParamDef, value: unknown): ParamValue {
     case 'length':
     case 'number':
     case 'percent': {
-      const limit = rangeText(def);
+      // The limit's text is written only for an error: every build checks every parameter.
       if (typeof value !== 'number' || !Number.isFinite(value)) {
-        throw new InputError(def.key, `${def.label} must be a number${def.kind === 'length' ? ' of millimetres' : ''} (got ${JSON.stringify(value) ?? String(value)})`, limit);
+        throw new InputError(def.key, `${def.label} must be a number${def.kind === 'length' ? ' of millimetres' : ''} (got ${JSON.stringify(value) ?? String(value)})`, rangeText(def));
       }
       if ((def.min !== undefined && value < def.min) || (def.max !== undefined && value > def.max) || (def.integer && !Number.isInteger(value))) {
         const shown = def.kind === 'length' ? mmText(value) : String(value);
+        const limit = rangeText(def);
         throw new InputError(def.key, `${def.label} must be ${limit} (got ${shown})`, limit);
       }
       return value;
@@ -89,8 +90,8 @@ function checkValue(def: ParamDef, value: unknown): ParamValue {
       if (typeof value !== 'boolean') throw new InputError(def.key, `${def.label} must be true or false (got ${JSON.stringify(value) ?? String(value)})`, 'true or false');
       return value;
     case 'enum': {
-      const options = (def.options ?? []).map((o) => o.value);
-      if (typeof value !== 'string' || !options.includes(value)) {
+      if (typeof value !== 'string' || !def.options?.some((o) => o.value === value)) {
+        const options = (def.options ?? []).map((o) => o.value);
         throw new InputError(def.key, `${def.label} must be one of ${options.join(', ')} (got ${JSON.stringify(value) ?? String(value)})`, options.join(', '));
       }
       return value;
@@ -106,6 +107,18 @@ function checkValue(def: ParamDef, value: unknown): ParamValue {
       }
       return value;
   }
+}
+
+const keySets = new WeakMap<readonly ParamDef[], ReadonlySet<string>>();
+
+/** The parameter keys of a kind's definitions, worked out once per definition list. */
+function keysOf(defs: readonly ParamDef[]): ReadonlySet<string> {
+  let keys = keySets.get(defs);
+  if (!keys) {
+    keys = new Set(defs.map((d) => d.key));
+    keySets.set(defs, keys);
+  }
+  return keys;
 }
 
 /**
@@ -126,9 +139,9 @@ export function validateSpec(spec: unknown): PieceSpec {
   if (typeof given !== 'object' || given === null || Array.isArray(given)) {
     throw new InputError('params', 'params must be an object of parameter values', 'an object');
   }
-  const byKey = new Map(defs.map((d) => [d.key, d]));
+  const known = keysOf(defs);
   for (const key of Object.keys(given)) {
-    if (!byKey.has(key)) {
+    if (!known.has(key)) {
       const keys = defs.map((d) => d.key).join(', ');
       throw new InputError(key, `is not a ${String(s.kind)} parameter; known parameters: ${keys}`, keys);
     }
