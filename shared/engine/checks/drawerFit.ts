@@ -56,3 +56,17 @@ export function drawerTravelCheck(drawers: readonly { partIds: readonly string[]
       : `On full-extension ${slide} slides each drawer opens its whole depth, ${both(travelMm)} at the deepest. Leave that much clear floor in front.`,
   })];
 }
+
+/** Undermount slides hide under the box: they want its bottom set up in the sides about 1/2 in (common practice, from memory). */
+export const UNDERMOUNT_SET_UP_MM = 12.7;
+
+/** A box on undermount slides whose bottom sits too low for the slide to fit under it. */
+export function undermountSetUpCheck(partIds: readonly string[], slide: SlideType, setUpMm: number): Check[] {
+  if (slide !== 'undermount' || setUpMm >= UNDERMOUNT_SET_UP_MM - 1e-9) return [];
+  return [check({
+    id: 'undermount-set-up', severity: 'warning', title: 'Drawer bottoms too low for undermount slides', partIds,
+    numbers: { setUpMm, neededMm: UNDERMOUNT_SET_UP_MM },
+    message: `The bottoms sit ${both(setUpMm)} up from the sides' lower edges; undermount slides fit under the bottom and usually want about ${both(UNDERMOUNT_SET_UP_MM)}.`,
+    fix: `Set the bottom groove ${both(UNDERMOUNT_SET_UP_MM)} up, or as the slide's instructions say.`,
+  })];
+}

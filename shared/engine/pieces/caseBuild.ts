@@ -22,7 +22,7 @@ import { SLIDE_RULES } from '../constructions/slides.ts';
 import { boxBetween, boxSize, boxUnion } from '../geometry/box.ts';
 import { sectionStiffnessNmm2, type SectionPiece } from '../structure/beam.ts';
 import type { Check, GlueUpPlan, Material } from '../types.ts';
-import { drawerFitChecks, drawerTravelCheck } from '../checks/drawerFit.ts';
+import { drawerFitChecks, drawerTravelCheck, undermountSetUpCheck } from '../checks/drawerFit.ts';
 import { frontClearanceChecks, revealChecks, type FrontFacts } from '../checks/fronts.ts';
 import { panelThicknessCheck } from '../checks/joinery.ts';
 import { panelFloatCheck } from '../checks/panelFloat.ts';
@@ -289,6 +289,7 @@ export function buildCase(plan: CasePlan, extras: CaseExtras): CaseBuild {
       slide: plan.contents.kind === 'drawers' ? plan.contents.drawers.slide : 'side-mount', rule: SLIDE_RULES[plan.contents.kind === 'drawers' ? plan.contents.drawers.slide : 'side-mount'],
     }));
   }
+  if (plan.contents.kind === 'drawers') checks.push(...undermountSetUpCheck(idsOf(drawerFacts.flatMap((f) => f.drafts.filter((x) => x.role === 'drawer-side'))), plan.contents.drawers.slide, plan.contents.drawers.bottomSetUpMm));
   checks.push(...drawerTravelCheck(drawerFacts.map((f) => ({ partIds: idsOf(f.drafts), boxDepthMm: f.layout.box.y[1] - f.layout.box.y[0] })), plan.contents.kind === 'drawers' ? plan.contents.drawers.slide : 'side-mount'));
   const frontIds = idsOf(fronts.map((f) => f.draft));
   checks.push(...revealChecks(frontIds, lay.frame, p.frontMount, p.reveal, p.overlay, plan.rows, plan.columns));

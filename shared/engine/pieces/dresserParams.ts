@@ -29,7 +29,7 @@ export const DRESSER_PARAMS: readonly ParamDef[] = [
   { key: 'depth', label: 'Depth', group: GROUPS.size, kind: 'length', default: 20 * IN, min: 250, max: 900, help: 'From the back to the face of the face frame (or the carcass edges); overlay fronts and the top\'s overhang stand in front of it.' },
   { key: 'height', label: 'Height to the top', group: GROUPS.size, kind: 'length', default: 34 * IN, min: 400, max: 2200, help: 'From the floor to the top surface.' },
 
-  { key: 'caseConstruction', label: 'Case', group: GROUPS.size, kind: 'enum', default: 'carcass', options: [{ value: 'carcass', label: 'Plywood carcass (face frame or frameless)' }, { value: 'frame-and-panel', label: 'Frame-and-panel sides on corner legs, web frames (like the chest)' }], help: 'A frame-and-panel case carries its drawers on wooden runners.' },
+  { key: 'caseConstruction', label: 'Case', group: GROUPS.size, kind: 'enum', default: 'carcass', options: [{ value: 'carcass', label: 'Plywood carcass (face frame or frameless)' }, { value: 'frame-and-panel', label: 'Frame-and-panel sides on corner legs, web frames (like the chest)' }], help: 'A frame-and-panel case stands on its legs and carries its drawers on wooden runners; the base, face-frame and carcass settings are then not used (a sheet top still uses the carcass sheet).' },
 
   { key: 'drawerRows', label: 'Rows of drawers', group: GROUPS.drawers, kind: 'number', default: 3, min: 1, max: MAX_DRAWER_ROWS, integer: true },
   { key: 'drawerColumns', label: 'Drawers in each row', group: GROUPS.drawers, kind: 'number', default: 2, min: 1, max: 4, integer: true, help: 'More than one: dividers separate the columns.' },

@@ -159,6 +159,13 @@ describe('buildPiece (dresser) options', () => {
     expect(r.checks.some((x) => x.id.startsWith('drawer-too-tall') && x.severity === 'error')).toBe(true);
   });
 
+  it('warns when undermount slides have no room under a low-set bottom', () => {
+    const c = dresser({ slideType: 'undermount', drawerBottomSetUp: 6 }).checks.find((x) => x.id === 'undermount-set-up');
+    expect(c?.severity).toBe('warning');
+    within(c?.numbers.neededMm, 12.7);
+    expect(dresser({ slideType: 'undermount' }).checks.some((x) => x.id === 'undermount-set-up')).toBe(false);
+  });
+
   it('refuses wooden runners without a face frame, naming slideType', () => {
     try {
       dresser({ faceFrame: false, slideType: 'wood-runners' });
