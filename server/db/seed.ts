@@ -19,6 +19,7 @@ import { hashPassword } from '../auth/password.ts';
 import { createCommentService } from '../features/comments/comments.service.ts';
 import { createDesignService } from '../features/designs/designs.service.ts';
 import { seedDemoPriceList } from './demoPriceList.ts';
+import { seedDemoRoom } from './demoRoom.ts';
 import { modelsFor } from './models/index.ts';
 
 export const DEMO_WORKSHOP = 'Tidewater Joinery';
@@ -101,6 +102,9 @@ export async function seedDemo(sequelize: Sequelize): Promise<boolean> {
     await designs.fork(chest.id, people.designer, { workshopId, revision: 2, title: 'Toy chest, white oak (from the blanket chest)' });
     created = true;
   }
+  // The bedroom the chest is for, measured and saved as a revision of its own (demoRoom.ts).
+  const measured = await existing(chestTitle);
+  if (measured) created = (await seedDemoRoom(sequelize, measured.id, people.designer)) || created;
 
   // The other demo pieces need the engine to build their kind; skipped until it does.
   const others: { title: string; kind: PieceKind; changes: Record<string, unknown>; message: string }[] = [
