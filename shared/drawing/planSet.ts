@@ -10,6 +10,7 @@ import { featureFaceText, featureKindText, featureSizeText } from './featureText
 import { finishAreaM2, finishingBlocks } from './finishing.ts';
 import { hardwareBlocks, lidTorque } from './hardware.ts';
 import { lengthText, partSizeText, type DrawingUnits } from './lengthText.ts';
+import { materialsSheets, type PlanSetMaterials } from './materialsPages.ts';
 import { movementBlocks } from './movementSummary.ts';
 import { overallView } from './overallViews.ts';
 import { drawingArea, sheetSizeMm } from './paper.ts';
@@ -18,7 +19,7 @@ import { partViews } from './partViews.ts';
 import { rectUnion } from './rects.ts';
 import { safetyBlocks } from './safety.ts';
 import { usualScales } from './scale.ts';
-import { cutListBlocks, glueUpBlocks, joineryBlock, materialsBlocks } from './schedules.ts';
+import { cutListBlocks, glueUpBlocks, joineryBlock } from './schedules.ts';
 import type { FlowBlock, Label, PlacedView, PlanSetModel, Primitive, Rect, Sheet, SheetSpec, TitleBlockInfo } from './types.ts';
 
 /** What a plan set is built with. */
@@ -30,6 +31,8 @@ export interface PlanSetOptions {
   workshopName: string;
   sheet: SheetSpec;
   units: DrawingUnits;
+  /** Takeoff, price list and extras for the materials pages; the default stock is laid out without one. */
+  materials?: PlanSetMaterials;
 }
 
 /** Height of a part sheet's heading, mm. */
@@ -183,7 +186,7 @@ export function buildPlanSet(result: PieceResult, opts: PlanSetOptions): PlanSet
     ...result.parts.map((p) => partSheet(p, letters.get(p.id)!, spec, units)),
     flowSheet('Cut list', cutListBlocks(result, units, letters)),
     flowSheet('Joinery schedule', [joineryBlock(result, units)]),
-    flowSheet('Materials', materialsBlocks(result)),
+    ...materialsSheets(result, spec, units, opts.materials),
     flowSheet('Glue-up sequence', glueUpBlocks(result)),
     flowSheet('Hardware', hardwareBlocks(result, units)),
     flowSheet('Finishing schedule', finishingBlocks(result)),
@@ -191,7 +194,8 @@ export function buildPlanSet(result: PieceResult, opts: PlanSetOptions): PlanSet
     flowSheet('Safety notes', safetyBlocks(result)),
   ];
   const partNames = body.filter((s) => s.name.startsWith('Part ')).map((s) => s.name);
-  const contents = body.filter((s) => !s.name.startsWith('Part ')).map((s) => s.name);
+  // Continuation pages of one group (cutting diagrams of one material) are listed once.
+  const contents = [...new Set(body.filter((s) => !s.name.startsWith('Part ')).map((s) => s.name.replace(/ \(\d+ of \d+\)$/, '')))];
   if (partNames.length) contents.splice(2, 0, `Part drawings ${letters.get(result.parts[0]!.id)}–${letters.get(result.parts[result.parts.length - 1]!.id)} (${partNames.length})`);
   const cover = coverSheet(result, spec, units, contents);
   const sheets: Sheet[] = [cover, ...body].map((s, i) => ({ ...s, number: i + 1 }));
