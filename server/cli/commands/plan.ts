@@ -5,11 +5,13 @@
  * Everything is built before anything is written, so bad input gives one error line, exit
  * code 2 and no file.
  */
-import { writeFileSync } from 'node:fs';
+import { readFileSync, writeFileSync } from 'node:fs';
 import { buildPlanSet } from '../../../shared/drawing/planSet.ts';
 import type { PaperSize } from '../../../shared/drawing/types.ts';
 import { buildPiece } from '../../../shared/engine/index.ts';
 import { InputError } from '../../../shared/errors.ts';
+import { parsePriceListCsv } from '../../../shared/materials/priceListCsv.ts';
+import type { PriceList } from '../../../shared/materials/priceList.ts';
 import { cutListCsv } from '../../../src/export/cutListCsv.ts';
 import { monoFontsNode } from '../../../src/export/fontsNode.ts';
 import { renderPlanSetPdf } from '../../../src/export/planSetPdf.ts';
@@ -31,10 +33,27 @@ interface PlanOptions {
   revision?: string;
   workshop?: string;
   date?: string;
+  prices?: string;
   out?: string;
 }
 
 const FORMATS = ['pdf', 'svg', 'csv', 'json'] as const;
+
+/** The price list in a CSV file (columns as for the workshop's upload); every bad line is named. */
+function readPriceList(path: string): PriceList {
+  let text: string;
+  try {
+    text = readFileSync(fromUserCwd(path), 'utf8');
+  } catch {
+    throw new InputError('--prices', `cannot read "${path}"`, 'a readable CSV file');
+  }
+  const parsed = parsePriceListCsv(text);
+  if (!parsed.ok) {
+    const lines = parsed.errors.map((e) => `line ${e.line}${e.column ? ` (${e.column})` : ''}: ${e.message}`).join('; ');
+    throw new InputError('--prices', `"${path}" has errors — ${lines}`, 'a price list CSV');
+  }
+  return parsed.priceList;
+}
 
 const SHEETS: readonly PaperSize[] = ['letter', 'a4', 'a3'];
 const ORIENTATIONS = ['landscape', 'portrait'] as const;
@@ -53,7 +72,7 @@ export async function planOutput(target: string, opts: PlanOptions): Promise<{ d
   const sheet = { size, orientation };
   switch (format) {
     case 'pdf': {
-      const model = buildPlanSet(result, { ...info, sheet });
+      const model = buildPlanSet(result, { ...info, sheet, ...(opts.prices === undefined ? {} : { materials: { priceList: readPriceList(opts.prices) } }) });
       return { data: new Uint8Array(await renderPlanSetPdf(model, await monoFontsNode())), format };
     }
     case 'svg': {
@@ -82,6 +101,7 @@ export const registerPlan: RegisterCommand = (program) => {
     .option('--revision <text>', 'revision for the title block', '1')
     .option('--workshop <text>', 'workshop name for the title block')
     .option('--date <YYYY-MM-DD>', 'date for the title block (default today)')
+    .option('--prices <file>', 'a price list CSV (kind,item,thickness,price,unit,name) to cost the job in the PDF')
     .option('--out <file>', 'file to write; without it svg, csv and json go to stdout')
     .action(async (piece: string, opts: PlanOptions) => {
       const { data, format } = await planOutput(piece, opts);

@@ -63,6 +63,13 @@ describe('casewright commands with relative paths', () => {
     expect(captured.stderr).toBe('');
   });
 
+  it('plan reads --prices relative to the user and names a bad line of it', async () => {
+    writeFileSync(join(userDir, 'prices.csv'), 'kind,item,thickness,price\nlumber,white-oak,4/4,9.50\nlumber,white-oak,4/4,lots\n');
+    expect(await runCli(['plan', 'chest', '--prices', 'prices.csv', '--out', 'chest.pdf'])).toBe(2);
+    expect(captured.stderr).toMatch(/--prices: .*line 3/);
+    expect(existsSync(join(userDir, 'chest.pdf'))).toBe(false);
+  });
+
   it('names the path as typed when the file is missing', async () => {
     expect(await runCli(['cutlist', 'specs/missing.json'])).toBe(2);
     expect(captured.stderr).toContain('"specs/missing.json"');
