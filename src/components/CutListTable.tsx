@@ -1,5 +1,6 @@
 import { useEffect, useMemo, useState } from 'react';
 import type { CutListGroup, Grain } from '../../shared/engine/types.ts';
+import { noteSentences } from '../editor/noteSentences.ts';
 import { cutListTable, type CutListSort, type CutListSortKey } from '../editor/cutListRows.ts';
 import { useLength } from '../state/useLength.ts';
 import { PartRow } from './PartRow.tsx';
@@ -60,7 +61,7 @@ export function CutListTable({ groups }: { groups: readonly CutListGroup[] }) {
             <PartRow key={row.partId} partId={row.partId} name={row.name}>
               <td className="px-2 py-1">
                 {row.name}
-                {row.notes.length > 0 && <span className="block text-[11px] text-graphite-faint">{row.notes.join('; ')}</span>}
+                {row.notes.length > 0 && <span className="block text-[11px] text-graphite-faint">{noteSentences(row.notes)}</span>}
               </td>
               <td className="dim whitespace-nowrap px-2 py-1 text-right">{row.quantity}</td>
               <td className="dim whitespace-nowrap px-2 py-1 text-right" data-col="length">{length(row.finished[0])}</td>

@@ -4,7 +4,7 @@
  */
 
 const SUFFIXES: readonly { suffix: string; format: (n: number, length: (mm: number) => string) => string }[] = [
-  { suffix: 'Mm', format: (n, length) => length(n) },
+  { suffix: 'Mm', format: (n, length) => nonZeroLength(n, length) },
   { suffix: 'Percent', format: (n) => `${round(n, 2)} %` },
   { suffix: 'Nm', format: (n) => `${round(n, 2)} N·m` },
   { suffix: 'Kg', format: (n) => `${round(n, 2)} kg` },
@@ -19,6 +19,16 @@ export function checkNumber(key: string, value: number, length: (mm: number) => 
     if (key.endsWith(suffix) && key.length > suffix.length) return { label: words(key.slice(0, -suffix.length)), text: format(value, length) };
   }
   return { label: words(key), text: String(round(value, 3)) };
+}
+
+/**
+ * A length in the maker's unit, except that one too small to show at their precision (a 0.4 mm
+ * shortfall at 1/16 in) is given in tenths of a millimetre rather than as a misleading zero.
+ */
+function nonZeroLength(mm: number, length: (mm: number) => string): string {
+  const text = length(mm);
+  if (mm === 0 || /[1-9]/.test(text)) return text;
+  return `${mm < 0 ? '−' : ''}${round(Math.abs(mm), 1) || 0.1} mm`;
 }
 
 function words(camel: string): string {

@@ -106,7 +106,8 @@ function Editor({ design, role, workshops, approvals }: { design: DesignData; ro
   return (
     <div className="flex min-h-0 flex-1 flex-col">
       <header className="relative flex flex-wrap items-center gap-x-4 gap-y-2 border-b border-rule bg-sheet/80 px-4 py-2">
-        <div className="min-w-0 flex-1">
+        {/* The title keeps room to be read; the controls wrap to a second line before it is cut short. */}
+        <div className="min-w-[min(100%,20rem)] flex-1">
           <p className="text-xs text-graphite-soft">
             <Link to={linkTo.workshop(design.workshopId)} className="hover:text-pencil">← Workshop</Link>
             <span className="mx-1.5">·</span>

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { checkNumber } from '../../../src/editor/checkNumbers.ts';
+import { formatLength } from '../../../shared/units/index.ts';
 
 const mm = (n: number) => `${n} mm`;
 
@@ -20,5 +21,12 @@ describe('checkNumber', () => {
 
   it('does not treat a key that is only a suffix as having a unit', () => {
     expect(checkNumber('N', 3, mm)).toEqual({ label: 'n', text: '3' });
+  });
+
+  it('gives a length too small for the maker\'s precision in tenths of a millimetre, never as zero', () => {
+    const sixteenths = (n: number) => formatLength(n, { unit: 'in', precision: 16 });
+    expect(checkNumber('shortfallMm', 0.4, sixteenths)).toEqual({ label: 'shortfall', text: '0.4 mm' });
+    expect(checkNumber('shortfallMm', 0, sixteenths).text).toBe(sixteenths(0));
+    expect(checkNumber('shortfallMm', 3.175, sixteenths).text).toBe('1/8"');
   });
 });
