@@ -114,17 +114,12 @@ export function caseLayout(plan: CasePlan): CaseLayout {
   const carcassDepth = y[1] - y[0];
   const backBand = p.backFit === 'groove' ? p.backGrooveSetIn + bt : bt;
   if (carcassDepth < backBand + 4 * 25.4) fail('depth', `${r(p.depth)} mm leaves the carcass ${r(carcassDepth)} mm deep behind the face frame, too shallow for its back`, `at least ${r(ffT + backBand + 4 * 25.4)} mm`);
-  if (plan.top && (p.backFit === 'groove' ? plan.top.stretcherWidthMm < backBand + 12 : false)) fail('stretcherWidth', 'the back stretcher must hold the back\'s groove', `at least ${r(backBand + 12)} mm`);
+  if (plan.top && p.backFit === 'groove' && plan.top.stretcherWidthMm < backBand + 12) fail('stretcherWidth', 'the back stretcher must hold the back\'s groove', `at least ${r(backBand + 12)} mm`);
   if (plan.top && 2 * plan.top.stretcherWidthMm + backBand > carcassDepth) fail('stretcherWidth', `two ${r(plan.top.stretcherWidthMm)} mm stretchers do not fit in a ${r(carcassDepth)} mm deep carcass`, `at most ${r((carcassDepth - backBand) / 2)} mm`);
   const carcassHeight = z[1] - z[0];
   if (carcassHeight < 2 * (e + t) + MIN_OPENING_MM) fail('height', `${r(p.height)} mm leaves the carcass only ${r(carcassHeight)} mm tall`, `at least ${r(p.height - carcassHeight + 2 * (e + t) + MIN_OPENING_MM)} mm`);
   if (plan.baseType === 'toe-kick' && p.toeKickSetback + 2 * SOLID_STOCK_MM + t > p.depth) fail('toeKickSetback', `a ${r(p.toeKickSetback)} mm toe kick leaves no base under the carcass`, `at most ${r(p.depth - 2 * SOLID_STOCK_MM - t)} mm`);
   if (plan.baseType === 'legs' && 2 * p.footSize > Math.min(p.width, p.depth)) fail('footSize', `${r(p.footSize)} mm feet do not fit under the case`, `at most ${r(Math.min(p.width, p.depth) / 2)} mm`);
-  if (plan.top) {
-    const o = plan.top.overhang;
-    if (plan.top.thicknessMm < 6) fail('topThickness', 'the top is too thin', 'at least 6 mm');
-    if (p.frontMount === 'overlay' && o.front < 0) fail('topOverhangFront', 'negative overhang', 'at least 0 mm');
-  }
 
   const frame: FrameWidths | null = p.faceFrame
     ? { stileMm: p.faceFrameStile, topRailMm: p.faceFrameTopRail, bottomRailMm: p.faceFrameBottomRail, midRailMm: p.faceFrameMidRail, mullionMm: p.faceFrameMullion }
@@ -156,7 +151,6 @@ export function caseLayout(plan: CasePlan): CaseLayout {
   const inset = p.frontMount === 'inset';
   const backFront = p.backFit === 'groove' ? p.depth - p.backGrooveSetIn - bt : p.depth - bt;
   const inside = { x: [t, p.width - t] as [number, number], y: [ffT, backFront] as [number, number], z: [z[0] + e + t, z[1] - e - t] as [number, number] };
-  if (plan.contents.kind === 'doors' && inset && p.frontThickness > ffT + 0.25 * inside.y[1]) fail('frontThickness', 'inset doors this thick reach far into the carcass', `at most ${r(ffT)} mm more than the face frame`);
   const dividerXs = plan.contents.kind === 'drawers' && plan.columns > 1 ? grid.columnBoundariesX : [];
   if (frame && dividerXs.length > 0 && frame.mullionMm < t) fail('faceFrameMullion', `a ${r(frame.mullionMm)} mm mullion does not cover the ${r(t)} mm divider behind it`, `at least ${r(t)} mm`);
 
