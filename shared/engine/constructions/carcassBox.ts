@@ -62,7 +62,7 @@ export interface CarcassBox {
 }
 
 const FLAT: AxisMap = { length: '+X', width: '+Y', thickness: '+Z' };
-const BAND_NOTE = 'Edge-band the front edge before assembly.';
+const bandNote = (lengthMm: number): string => `Edge-band the front edge (${Math.round(lengthMm)} mm) before assembly.`;
 
 /** Builds the carcass. Asserts that every extra feature lies inside one of its parts. */
 export function carcassBox(o: CarcassBoxOptions): CarcassBox {
@@ -81,7 +81,7 @@ export function carcassBox(o: CarcassBoxOptions): CarcassBox {
   const panelBackY = groove ? y1 : y1 - bt;
   const backInset = groove ? Math.min(d, t / 2) : 0;
   const explodeOut = (sx: number, sy: number, sz: number) => [sx * o.explodeMm, sy * o.explodeMm, sz * o.explodeMm] as const;
-  const banded = (notes: string[]) => (o.edgeBanded ? [...notes, BAND_NOTE] : notes);
+  const banded = (notes: string[], edgeMm: number) => (o.edgeBanded ? [...notes, bandNote(edgeMm)] : notes);
 
   // Cuts in the sides for the top and bottom, and the back.
   const sideCuts = (inner: number, outerToInner: 1 | -1): FeatureDraft[] => {
@@ -107,7 +107,7 @@ export function carcassBox(o: CarcassBoxOptions): CarcassBox {
       size: [z1 - z0, y1 - y0, t],
       axes: left ? { length: '+Z', width: '+Y', thickness: '-X' } : { length: '+Z', width: '-Y', thickness: '+X' },
       world, explodeMm: explodeOut(left ? -1 : 1, 0, 0),
-      features: sideCuts(left ? inX[0] : inX[1], left ? 1 : -1), notes: banded([]), name: sideNamer,
+      features: sideCuts(left ? inX[0] : inX[1], left ? 1 : -1), notes: banded([], z1 - z0), name: sideNamer,
     };
   };
   const left = side('left');
@@ -137,7 +137,7 @@ export function carcassBox(o: CarcassBoxOptions): CarcassBox {
     return {
       group, member, label, role, material: o.sheet, grain: 'none',
       size: [inX[1] - inX[0] + 2 * d, yRange[1] - yRange[0], t], axes: FLAT,
-      world, explodeMm: explodeOut(0, 0, sz), features: [...features, ...extra], notes: banded([]), name,
+      world, explodeMm: explodeOut(0, 0, sz), features: [...features, ...extra], notes: member === 'back' ? [] : banded([], inX[1] - inX[0] + 2 * d), name,
     };
   };
   const bottom = horizontal('case/bottom', 'bottom', 'carcass bottom', 'case-bottom', bottomZ, [y0, panelBackY], horizontalCuts('bottom', bottomZ[1], '+Z', [y0, panelBackY]), () => ({ id: 'case-bottom', name: 'Case bottom' }), -0.5);
@@ -170,7 +170,7 @@ export function carcassBox(o: CarcassBoxOptions): CarcassBox {
     group: 'case/divider', member: `divider-${i + 1}`, label: `drawer divider ${i + 1}`, role: 'divider', material: o.sheet, grain: 'none',
     size: [topUnderside + d - (bottomZ[1] - d), dividerY[1] - dividerY[0], t], axes: { length: '+Z', width: '+Y', thickness: '-X' },
     world: boxBetween([xc - t / 2, dividerY[0], bottomZ[1] - d], [xc + t / 2, dividerY[1], topUnderside + d]),
-    explodeMm: explodeOut(0, -0.5, 0), features: [], notes: banded([]),
+    explodeMm: explodeOut(0, -0.5, 0), features: [], notes: banded([], topUnderside - bottomZ[1] + 2 * d),
     name: () => ({ id: 'divider', name: 'Drawer divider' }),
   }));
 

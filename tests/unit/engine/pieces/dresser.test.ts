@@ -132,6 +132,19 @@ describe('buildPiece (dresser) options', () => {
     within(part(r, 'row-1-drawer-front').widthMm, 161.925 - 3.175);
   });
 
+  it('takes listed heights from the top, the bottom row taking the rest', () => {
+    // 5 in and 6 in listed; the bottom row gets 561.975 − 127 − 152.4 = 282.575 mm; fronts 1 in taller.
+    const r = dresser({ drawerGraduation: 'listed', rowHeight1: 5 * IN, rowHeight2: 6 * IN, rowHeight3: 1 * IN });
+    within(part(r, 'row-1-drawer-front').widthMm, 6 * IN);
+    within(part(r, 'row-2-drawer-front').widthMm, 7 * IN);
+    within(part(r, 'row-3-drawer-front').widthMm, 282.575 + IN);
+  });
+
+  it('bands the front edges of a frameless carcass and says how much', () => {
+    const r = dresser({ faceFrame: false });
+    expect(part(r, 'case-side').notes.join(' ')).toMatch(/Edge-band the front edge \(740 mm\)/);
+  });
+
   it('rides wooden runners level with the face-frame rails', () => {
     const r = dresser({ slideType: 'wood-runners' });
     expect(r.parts.some((p) => p.role === 'runner')).toBe(true);
