@@ -19,15 +19,19 @@ export type { ResultSummary, ResultComparison } from './compare.ts';
 /** Version of the engine's geometry and rules; stored beside each revision built with it. */
 export const ENGINE_VERSION = '0.1.0';
 
-const cache = new WeakMap<PieceSpec, PieceResult>();
+// Only the last build is remembered. A WeakMap of every spec ever built cost more than the build
+// itself: V8 keeps a WeakMap's values alive through young-generation collections even when
+// their keys are garbage, so each ~100 kB result was promoted and swept by full collections,
+// and most callers (the editor, fit to the niche, the server) pass a fresh spec every time.
+let last: { spec: PieceSpec; result: PieceResult } | null = null;
 
 /**
  * Checks `spec` (see `validateSpec`) and builds the piece. Throws an `InputError` naming the
- * parameter and its limit for bad input; the same spec object is built once.
+ * parameter and its limit for bad input; the same spec object built twice in a row is built
+ * once (callers that keep several specs cache their own results).
  */
 export function buildPiece(spec: PieceSpec): PieceResult {
-  const cached = cache.get(spec);
-  if (cached) return cached;
+  if (last?.spec === spec) return last.result;
   const checked = validateSpec(spec);
   let built;
   switch (checked.kind) {
@@ -55,6 +59,6 @@ export function buildPiece(spec: PieceSpec): PieceResult {
     bboxMinMm: built.bboxMinMm,
     derived: deriveOutputs(checked.kind, built.parts, built.joints),
   });
-  cache.set(spec, result);
+  last = { spec, result };
   return result;
 }
