@@ -6,3 +6,4 @@ export * from './partsForLayout.ts';
 export * from './takeoff.ts';
 export * from './cost.ts';
 export * from './shoppingList.ts';
+export * from './stockSettings.ts';

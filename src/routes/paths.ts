@@ -9,6 +9,7 @@ export const paths = {
   newDesign: '/workshops/:workshopId/new',
   design: '/designs/:designId',
   compare: '/designs/:designId/compare',
+  materials: '/designs/:designId/materials',
 } as const;
 
 export type PathName = keyof typeof paths;
@@ -20,6 +21,7 @@ export const linkTo = {
   design: (designId: string) => `/designs/${encodeURIComponent(designId)}`,
   compare: (designId: string, from: number, to: number) =>
     `/designs/${encodeURIComponent(designId)}/compare?from=${from}&to=${to}`,
+  materials: (designId: string) => `/designs/${encodeURIComponent(designId)}/materials`,
   signIn: (next?: string) => (next ? `/signin?next=${encodeURIComponent(next)}` : '/signin'),
 };
 

@@ -24,6 +24,7 @@ export const router = createBrowserRouter([
           { path: paths.workshop, lazy: async () => ({ Component: (await import('./WorkshopPage.tsx')).WorkshopPage }) },
           { path: paths.newDesign, lazy: async () => ({ Component: (await import('./NewDesignPage.tsx')).NewDesignPage }) },
           { path: paths.design, lazy: async () => ({ Component: (await import('./DesignEditorPage.tsx')).DesignEditorPage }) },
+          { path: paths.materials, lazy: async () => ({ Component: (await import('./MaterialsPage.tsx')).MaterialsPage }) },
           { path: paths.compare, lazy: async () => ({ Component: (await import('./ComparePage.tsx')).ComparePage }) },
         ],
       },
