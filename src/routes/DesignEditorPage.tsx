@@ -126,6 +126,7 @@ function Editor({ design, role, workshops, approvals }: { design: DesignData; ro
         </div>
         {result && <p className="dim text-sm text-graphite" aria-label="Overall width, depth and height">{result.bboxMm.map((n) => length(n)).join(' × ')}</p>}
         <ApprovalBadge approval={design.approval} />
+        <Link to={linkTo.materials(design.id)} className="btn" title="Cutting diagrams, board feet and sheets, cost and the shopping list">Materials</Link>
         <ExportMenu result={outcome.ok && typedOutcome.ok ? outcome.result : null} title={design.title} revision={baseRevision} dirty={dirty}
           workshopName={workshops.find((w) => w.id === design.workshopId)?.name ?? ''} />
         {canEdit && (
