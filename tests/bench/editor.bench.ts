@@ -36,7 +36,7 @@ function percentile(sorted: number[], p: number): number {
 function row(name: string, values: number[]): string {
   const sorted = [...values].sort((a, b) => a - b);
   const fmt = (ms: number) => `${ms.toFixed(0)} ms`.padStart(8);
-  return `  ${name.padEnd(44)} median ${fmt(percentile(sorted, 50))}  p95 ${fmt(percentile(sorted, 95))}  max ${fmt(sorted.at(-1)!)}  runs ${sorted.length}`;
+  return `  ${name.padEnd(48)} median ${fmt(percentile(sorted, 50))}  p95 ${fmt(percentile(sorted, 95))}  max ${fmt(sorted.at(-1)!)}  runs ${sorted.length}`;
 }
 
 export async function benchEditor(): Promise<string> {
@@ -81,11 +81,12 @@ export async function benchEditor(): Promise<string> {
         const change = performance.getEntriesByName('param-change').at(-1);
         return Boolean(change && performance.getEntriesByName('solids-drawn').some((m) => m.startTime > change.startTime));
       }, undefined, { timeout: 120_000 });
-      const marks = await page.evaluate(() => {
+      // No named helpers inside: tsx's name-keeping wrapper does not exist in the page.
+      const marks = await page.evaluate((names) => {
         const change = performance.getEntriesByName('param-change').at(-1)!.startTime;
-        const after = (name: string) => performance.getEntriesByName(name).find((m) => m.startTime > change)?.startTime ?? NaN;
-        return { tables: after('tables-drawn') - change, piece: after('piece-drawn') - change, solids: after('solids-drawn') - change };
-      });
+        const [tables, piece, solids] = names.map((name) => (performance.getEntriesByName(name).find((m) => m.startTime > change)?.startTime ?? NaN) - change);
+        return { tables: tables!, piece: piece!, solids: solids! };
+      }, ['tables-drawn', 'piece-drawn', 'solids-drawn']);
       toTables.push(marks.tables);
       toPiece.push(marks.piece);
       toSolids.push(marks.solids);
