@@ -65,9 +65,9 @@ export interface BoardDiagram {
 }
 
 // Mono glyphs are about 0.6 of their height wide; a size line such as `30 15/16" × 12 1/2"`
-// has about 18 characters; two lines with their spacing take 2.6 text heights, one line 1.4.
+// has up to about 22 characters; two lines with their spacing take 2.6 text heights, one line 1.4.
 const GLYPH_WIDTH = 0.62;
-const SIZE_CHARS = 18;
+const SIZE_CHARS = 22;
 /** Largest label, mm, so a big panel's label does not shout. */
 export const MAX_LABEL_MM = 60;
 /**

@@ -38,7 +38,7 @@ export function SheetDiagramView({ plan, kerfMm, faceGrain, title }: Props) {
       <figcaption className="mb-1 flex flex-wrap items-baseline justify-between gap-x-4 text-sm">
         <span className="font-semibold">{title}</span>
         <span className="dim text-xs text-graphite-soft">
-          {plan.stockName} · {length(plan.widthMm)} × {length(plan.lengthMm)} · yield {(plan.yield * 100).toFixed(0)} % · {d.cuts.length} cuts
+          {plan.offcut ? `${plan.stockName} · ` : ''}{length(plan.widthMm)} × {length(plan.lengthMm)} · yield {(plan.yield * 100).toFixed(0)} % · {d.cuts.length} cuts
         </span>
       </figcaption>
       <svg viewBox={`${-text} ${-text} ${d.lengthMm + 2 * text} ${d.widthMm + footer + text}`} className="h-auto w-full" role="img" aria-label={`${title}: ${d.parts.length} parts, ${d.cuts.length} saw cuts`}>

@@ -55,7 +55,7 @@ export function StockOptionsForm({ settings, onChange, sheetIds }: { settings: S
         <LengthListInput label="Lengths" valuesMm={settings.boardLengthsMm} maxMm={MAX_STOCK_MM} onChange={(boardLengthsMm) => set({ boardLengthsMm })} />
         <LengthListInput label="Widths" valuesMm={settings.boardWidthsMm} maxMm={2_000} onChange={(boardWidthsMm) => set({ boardWidthsMm })} />
       </fieldset>
-      <fieldset className="grid grid-cols-3 gap-2">
+      <fieldset className="grid grid-cols-[1fr_1fr_1.5fr] gap-2">
         <legend className="mb-1 text-xs font-semibold uppercase tracking-widest text-graphite-soft">Saw and optimiser</legend>
         <LengthInput label="Kerf" valueMm={settings.kerfMm} maxMm={20} allowZero onChange={(kerfMm) => set({ kerfMm })} />
         <LengthInput label="Edge trim" valueMm={settings.trimMm} maxMm={100} allowZero onChange={(trimMm) => set({ trimMm })} />
