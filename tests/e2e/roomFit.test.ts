@@ -109,6 +109,7 @@ const lidCheck = (passed: boolean) => page.locator(`li[data-room-check="lid-open
 describe('room fit in the design editor', { timeout: 300_000 }, () => {
   let designId = '';
   let revisionsBefore = 0;
+  let startParams: PieceSpec['params'] = {};
 
   it('opens the demo chest and enters its room, marking a bad length in place with its reason', async () => {
     await page.goto(`${server.url}/signin`);
@@ -116,12 +117,11 @@ describe('room fit in the design editor', { timeout: 300_000 }, () => {
     await page.getByLabel('Password').fill(demo.password);
     await page.getByRole('button', { name: 'Sign in' }).click();
     await page.waitForURL(/\/workshops\/[0-9a-f-]{36}$/);
-    const chestCard = page.locator('main ul > li', { has: page.locator('span', { hasText: /^chest$/ }) }).first();
-    await chestCard.getByRole('link').click();
+    await page.getByRole('link', { name: 'Blanket chest, white oak', exact: true }).click();
     await page.waitForURL(/\/designs\/[0-9a-f-]{36}$/);
     designId = page.url().split('/').pop() ?? '';
     await page.locator('table[aria-label="Cut list"]').waitFor();
-    revisionsBefore = (await headOf(designId)).head;
+    ({ head: revisionsBefore, spec: { params: startParams } } = await headOf(designId));
 
     await page.getByRole('tab', { name: 'Room', exact: true }).click();
     const add = page.getByRole('button', { name: 'Add a room' });
@@ -194,5 +194,12 @@ describe('room fit in the design editor', { timeout: 300_000 }, () => {
     expect(room.inked).toBeGreaterThan(0.05);
     expect(room.red).toBeLessThan(0.0005);
     await shot('room-fit-after');
+  });
+
+  it('restores the revision it started from, so the demo chest is left at its own size', async () => {
+    // Other browser tests share this database and open the same demo chest.
+    await page.locator(`li[data-revision="${revisionsBefore}"]`).getByRole('button', { name: 'Restore as latest' }).click();
+    await expect.poll(async () => (await headOf(designId)).head, { timeout: 30_000 }).toBe(revisionsBefore + 2);
+    expect((await headOf(designId)).spec.params).toEqual(startParams);
   });
 });
