@@ -30,18 +30,18 @@ export function TakeoffNumbers({ takeoff }: { takeoff: MaterialsTakeoff }) {
           {takeoff.sheets.map((s) => (
             <tr key={s.sheetId} className="border-b border-rule/60" data-sheet-good={s.sheetId}>
               <td className="px-2 py-1 font-sans">{s.sheetName}</td>
-              <td className="px-2 py-1 text-right">{s.layout.sheetsBought} sheet{s.layout.sheetsBought === 1 ? '' : 's'}{s.layout.offcutsUsed ? ` + ${s.layout.offcutsUsed} offcut${s.layout.offcutsUsed === 1 ? '' : 's'}` : ''}</td>
-              <td className="px-2 py-1 text-right" title="Area lower bound: total part area over the usable sheet area, rounded up (Martello & Vigo 1998)">≥ {s.layout.lowerBound} sheet{s.layout.lowerBound === 1 ? '' : 's'}</td>
-              <td className="px-2 py-1 text-right">{pct(s.layout.yield)}</td>
+              <td className="whitespace-nowrap px-2 py-1 text-right">{s.layout.sheetsBought} sheet{s.layout.sheetsBought === 1 ? '' : 's'}{s.layout.offcutsUsed ? ` + ${s.layout.offcutsUsed} offcut${s.layout.offcutsUsed === 1 ? '' : 's'}` : ''}</td>
+              <td className="whitespace-nowrap px-2 py-1 text-right" title="Area lower bound: total part area over the usable sheet area, rounded up (Martello & Vigo 1998)">≥ {s.layout.lowerBound} sheet{s.layout.lowerBound === 1 ? '' : 's'}</td>
+              <td className="whitespace-nowrap px-2 py-1 text-right">{pct(s.layout.yield)}</td>
               <td className="px-2 py-1 font-sans text-xs text-graphite-soft">{s.layout.sheetsBought === s.layout.lowerBound ? 'at the lower bound' : `${s.layout.sheetsBought - s.layout.lowerBound} above the bound`}{s.layout.cancelled ? ' · stopped early' : ''}</td>
             </tr>
           ))}
           {takeoff.boards.map((b) => (
             <tr key={`${b.speciesId}:${b.quarters}`} className="border-b border-rule/60" data-species={`${b.speciesId}:${b.quarters}`}>
               <td className="px-2 py-1 font-sans">{b.speciesName} {b.quarters}/4</td>
-              <td className="px-2 py-1 text-right">{b.layout.boardFeetBought.toFixed(2)} bd ft</td>
-              <td className="px-2 py-1 text-right">{b.layout.boardFeetFinished.toFixed(2)} bd ft finished</td>
-              <td className="px-2 py-1 text-right">{b.layout.boardFeetBought > 0 ? pct(b.layout.boardFeetFinished / b.layout.boardFeetBought) : '—'}</td>
+              <td className="whitespace-nowrap px-2 py-1 text-right">{b.layout.boardFeetBought.toFixed(2)} bd ft</td>
+              <td className="whitespace-nowrap px-2 py-1 text-right">{b.layout.boardFeetFinished.toFixed(2)} bd ft finished</td>
+              <td className="whitespace-nowrap px-2 py-1 text-right">{b.layout.boardFeetBought > 0 ? pct(b.layout.boardFeetFinished / b.layout.boardFeetBought) : '—'}</td>
               <td className="px-2 py-1 font-sans text-xs text-graphite-soft">
                 {b.layout.boards.length} board{b.layout.boards.length === 1 ? '' : 's'}, {b.layout.boardFeetRough.toFixed(2)} bd ft rough
                 {b.layout.splitGroups.length > 0 && <span className="text-pencil"> · grain match split: {b.layout.splitGroups.length} group{b.layout.splitGroups.length === 1 ? '' : 's'} too wide for one board</span>}
