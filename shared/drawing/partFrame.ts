@@ -4,7 +4,7 @@
  * the broad face with more cuts on it; the edge view is seen from below the face view and drawn
  * under it; the end view is seen from the right and drawn beside it.
  */
-import type { Part } from '../engine/types.ts';
+import type { Feature, Part } from '../engine/types.ts';
 
 /** The three views of a part drawing. */
 export type PartViewId = 'face' | 'edge' | 'end';
@@ -55,4 +55,23 @@ export function partSize(part: Part): readonly [number, number, number] {
 /** A local coordinate as seen on a view axis (mm). */
 export function onAxis(use: AxisUse, size: readonly number[], value: number): number {
   return use.flip ? size[use.axis]! - value : value;
+}
+
+/** The local axis (0 length, 1 width, 2 thickness) a face looks along. */
+export const NORMAL: Readonly<Record<Feature['face'], 0 | 1 | 2>> = {
+  'end-a': 0, 'end-b': 0, 'edge-a': 1, 'edge-b': 1, 'face-a': 2, 'face-b': 2,
+};
+
+/** The view that shows local axes `a` and `b` side by side. */
+export function viewShowing(a: number, b: number): PartViewId {
+  const s = new Set([a, b]);
+  if (s.has(0) && s.has(1)) return 'face';
+  if (s.has(0) && s.has(2)) return 'edge';
+  return 'end';
+}
+
+/** The two local axes in the plane of a face whose normal is axis `n`. */
+export function inPlane(n: number): [number, number] {
+  const axes = [0, 1, 2].filter((a) => a !== n);
+  return [axes[0]!, axes[1]!];
 }

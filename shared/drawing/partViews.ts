@@ -7,24 +7,15 @@
 import type { Box3, Feature, Part } from '../engine/types.ts';
 import { applyBreak, chooseBreak } from './breakView.ts';
 import { dimension } from './chain.ts';
+import { markPrimitives, type DetailMark } from './jointDetails.ts';
 import { lengthText, type DrawingUnits } from './lengthText.ts';
-import { chooseFaceUp, onAxis, partSize, partViewAxes, type FaceUp, type PartViewAxes, type PartViewId } from './partFrame.ts';
+import { chooseFaceUp, inPlane, NORMAL, onAxis, partSize, partViewAxes, viewShowing, type FaceUp, type PartViewAxes, type PartViewId } from './partFrame.ts';
 import { partEdges, partGrid } from './partSolid.ts';
 import type { DimensionRequest, ModelView, Primitive, Pt } from './types.ts';
 
 const EPS = 0.01;
-const NORMAL: Readonly<Record<Feature['face'], 0 | 1 | 2>> = {
-  'end-a': 0, 'end-b': 0, 'edge-a': 1, 'edge-b': 1, 'face-a': 2, 'face-b': 2,
-};
 const TITLES: Readonly<Record<PartViewId, string>> = { face: 'Face', edge: 'Edge', end: 'End' };
 
-/** The view that shows local axes `a` and `b` side by side. */
-function viewShowing(a: number, b: number): PartViewId {
-  const s = new Set([a, b]);
-  if (s.has(0) && s.has(1)) return 'face';
-  if (s.has(0) && s.has(2)) return 'edge';
-  return 'end';
-}
 
 class DimensionSet {
   readonly byView: Record<PartViewId, DimensionRequest[]> = { face: [], edge: [], end: [] };
@@ -40,7 +31,7 @@ class DimensionSet {
    * Dimensions `lo`–`hi` along local `axis` in the view that also shows `other`, with the
    * extension lines starting at the near side of `ref` (a local box).
    */
-  add(axis: number, other: number, lo: number, hi: number, ref: Box3, tier: number, extra: { key?: string; overall?: boolean } = {}): void {
+  add(axis: number, other: number, lo: number, hi: number, ref: Box3, tier: number, extra: { key?: string; overall?: boolean; note?: string } = {}): void {
     if (hi - lo < EPS) return;
     const view = viewShowing(axis, other);
     const va = this.axes[view];
@@ -56,7 +47,7 @@ class DimensionSet {
     const key = `${view}|${horizontal}|${Math.min(a, b).toFixed(2)}|${Math.max(a, b).toFixed(2)}`;
     if (this.seen.has(key)) return;
     this.seen.add(key);
-    this.byView[view].push(dimension(Math.min(a, b), Math.max(a, b), at, horizontal ? 'h' : 'v', side, tier, this.units, extra.key ? { key: extra.key } : {}));
+    this.byView[view].push(dimension(Math.min(a, b), Math.max(a, b), at, horizontal ? 'h' : 'v', side, tier, this.units, { ...(extra.key ? { key: extra.key } : {}), ...(extra.note ? { note: extra.note } : {}) }));
   }
 
   /** A chain of positions along `axis` from the part's low end through `marks` to its high end. */
@@ -66,10 +57,6 @@ class DimensionSet {
   }
 }
 
-function inPlane(n: number): [number, number] {
-  const axes = [0, 1, 2].filter((a) => a !== n);
-  return [axes[0]!, axes[1]!];
-}
 
 function extentOf(box: Box3, axis: number): number {
   return box.max[axis]! - box.min[axis]!;
@@ -146,6 +133,59 @@ function addFeatureDimensions(f: Feature, size: readonly [number, number, number
   }
 }
 
+/** Fewest holes in a row that are dimensioned as a line (first centre and spacing) rather than one by one. */
+const HOLE_LINE_MIN = 3;
+/** Spacings within this (mm) count as equal. */
+const SPACING_TOLERANCE_MM = 0.05;
+
+type Hole = Extract<Feature, { type: 'hole' | 'slot' }>;
+
+/** A hole's centre in the part's frame and the in-plane axes of its face. */
+function holeCentre(f: Hole): { p: number; q: number; c: number[] } | null {
+  const m = f.removed[0];
+  if (!m) return null;
+  const [p, q] = inPlane(NORMAL[f.face]);
+  return { p, q, c: [0, 1, 2].map((a) => (m.min[a]! + m.max[a]!) / 2) };
+}
+
+/**
+ * Rows of like holes or slots evenly spaced along one axis (shelf-pin lines, screw slots): each is dimensioned by its
+ * offset from the edge, its first centre from the end and one spacing with the count of spaces,
+ * instead of a dimension per hole. Returns the lines' dimensions added and the ids of their holes.
+ */
+function addHoleLines(features: readonly Feature[], size: readonly [number, number, number], dims: DimensionSet): Set<string> {
+  const rows = new Map<string, { along: number; across: number; c: number[]; f: Hole }[]>();
+  for (const f of features) {
+    if (f.type !== 'hole' && f.type !== 'slot') continue;
+    const centre = holeCentre(f);
+    if (!centre) continue;
+    // A row runs along either in-plane axis; group by the other coordinate.
+    for (const [along, across] of [[centre.p, centre.q], [centre.q, centre.p]] as const) {
+      const slot = f.type === 'slot' ? `${f.slotLengthMm.toFixed(2)}|${f.along}` : 'hole';
+      const key = `${f.face}|${slot}|${f.diameterMm.toFixed(2)}|${f.depthMm.toFixed(2)}|${along}|${centre.c[across]!.toFixed(2)}`;
+      rows.set(key, [...(rows.get(key) ?? []), { along, across, c: centre.c, f }]);
+    }
+  }
+  const done = new Set<string>();
+  for (const row of [...rows.values()].sort((a, b) => b.length - a.length)) {
+    const holes = row.filter((h) => !done.has(h.f.id)).sort((a, b) => a.c[a.along]! - b.c[b.along]!);
+    if (holes.length < HOLE_LINE_MIN) continue;
+    const { along, across } = holes[0]!;
+    const at = holes.map((h) => h.c[along]!);
+    const spacing = at[1]! - at[0]!;
+    if (spacing < SPACING_TOLERANCE_MM || at.some((x, i) => i > 0 && Math.abs(x - at[i - 1]! - spacing) > SPACING_TOLERANCE_MM)) continue;
+    const point = (c: readonly number[]): Box3 => ({ min: [c[0]!, c[1]!, c[2]!], max: [c[0]!, c[1]!, c[2]!] });
+    const first = holes[0]!.c;
+    dims.add(across, along, 0, first[across]!, point(first), 1);
+    dims.add(along, across, 0, at[0]!, point(first), 1);
+    dims.add(along, across, at[0]!, at[1]!, point(first), 0, { note: `${holes.length - 1} spaces @` });
+    // A slot line also needs the slot's own length, once.
+    if (holes[0]!.f.type === 'slot') addFeatureDimensions(holes[0]!.f, size, dims);
+    for (const h of holes) done.add(h.f.id);
+  }
+  return done;
+}
+
 /** Circles and slot outlines with centre lines, for views that look onto the hole's face. */
 function holePrimitives(f: Feature, view: PartViewAxes, size: readonly [number, number, number], units: DrawingUnits): Primitive[] {
   if (f.type !== 'hole' && f.type !== 'slot') return [];
@@ -218,14 +258,15 @@ function oneLabelEach(primitives: readonly Primitive[]): Primitive[] {
   });
 }
 
-/** The three views of `part`, each with its dimensions, in model space (mm, y up). */
-export function partViews(part: Part, units: DrawingUnits, up: FaceUp = chooseFaceUp(part)): Record<PartViewId, ModelView> {
+/** The three views of `part`, each with its dimensions and any detail `marks`, in model space (mm, y up). */
+export function partViews(part: Part, units: DrawingUnits, up: FaceUp = chooseFaceUp(part), marks: readonly DetailMark[] = []): Record<PartViewId, ModelView> {
   const size = partSize(part);
   const axes = partViewAxes(up);
   const grid = partGrid(part);
   const dims = new DimensionSet(axes, size, units);
   const whole: Box3 = { min: [0, 0, 0], max: size };
-  for (const f of part.features) addFeatureDimensions(f, size, dims);
+  const inLines = addHoleLines(part.features, size, dims);
+  for (const f of part.features) if (!inLines.has(f.id)) addFeatureDimensions(f, size, dims);
   dims.add(0, 1, 0, size[0], whole, 2, { key: 'length', overall: true });
   dims.add(1, 0, 0, size[1], whole, 2, { key: 'width', overall: true });
   dims.add(2, 0, 0, size[2], whole, 2, { key: 'thickness', overall: true });
@@ -236,7 +277,10 @@ export function partViews(part: Part, units: DrawingUnits, up: FaceUp = chooseFa
   const out = {} as Record<PartViewId, ModelView>;
   for (const id of ['face', 'edge', 'end'] as const) {
     const va = axes[id];
-    const primitives: Primitive[] = [...partEdges(part, va, grid), ...oneLabelEach(part.features.flatMap((f) => holePrimitives(f, va, size, units)))];
+    const primitives: Primitive[] = [
+      ...partEdges(part, va, grid), ...oneLabelEach(part.features.flatMap((f) => holePrimitives(f, va, size, units))),
+      ...marks.filter((m) => m.view === id).flatMap(markPrimitives),
+    ];
     const view: ModelView = {
       id, title: TITLES[id], primitives, dimensions: dims.byView[id], callouts: [],
       bounds: { x: 0, y: 0, w: size[va.u.axis], h: size[va.v.axis] },

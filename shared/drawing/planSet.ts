@@ -3,24 +3,21 @@
  * then the cut list, joinery, materials, glue-up, hardware, finishing, wood movement and safety
  * pages. Pure data; `svg.ts` and the PDF renderer draw it.
  */
-import type { Part, PieceResult } from '../engine/types.ts';
-import { arrangeAt, centreIn, fitArrangement, type Arrangement } from './arrange.ts';
+import type { PieceResult } from '../engine/types.ts';
+import { fitArrangement } from './arrange.ts';
 import { isometricView } from './axonometric.ts';
-import { featureFaceText, featureKindText, featureSizeText } from './featureText.ts';
 import { finishAreaM2, finishingBlocks } from './finishing.ts';
 import { hardwareBlocks, lidTorque } from './hardware.ts';
-import { lengthText, partSizeText, type DrawingUnits } from './lengthText.ts';
+import { lengthText, type DrawingUnits } from './lengthText.ts';
 import { materialsSheets, type PlanSetMaterials } from './materialsPages.ts';
 import { movementBlocks } from './movementSummary.ts';
 import { overallView } from './overallViews.ts';
 import { drawingArea, sheetSizeMm } from './paper.ts';
 import { partLetters } from './partLetters.ts';
-import { partViews } from './partViews.ts';
-import { rectUnion } from './rects.ts';
+import { partSheet } from './partSheet.ts';
 import { safetyBlocks } from './safety.ts';
-import { usualScales } from './scale.ts';
 import { cutListBlocks, glueUpBlocks, joineryBlock } from './schedules.ts';
-import type { FlowBlock, Label, PlacedView, PlanSetModel, Primitive, Rect, Sheet, SheetSpec, TitleBlockInfo } from './types.ts';
+import type { FlowBlock, PlacedView, PlanSetModel, Rect, Sheet, SheetSpec, TitleBlockInfo } from './types.ts';
 
 /** What a plan set is built with. */
 export interface PlanSetOptions {
@@ -35,13 +32,6 @@ export interface PlanSetOptions {
   materials?: PlanSetMaterials;
 }
 
-/** Height of a part sheet's heading, mm. */
-const HEADING_MM = 16;
-/** Share of the drawing area's height part views may always take, however long the feature table. */
-const PART_VIEWS_MIN_SHARE = 0.66;
-/** Height a feature-table row and the table's title and footnote take, mm (7.5 pt rows). */
-const TABLE_ROW_MM = 4.6;
-const TABLE_EXTRA_MM = 22;
 
 type SheetDraft = Omit<Sheet, 'number'>;
 
@@ -54,16 +44,23 @@ function scalesOf(views: readonly PlacedView[]): string {
   return [...new Set(views.map((v) => v.scaleText))].join(', ');
 }
 
-/** The overall views sheet: top above front, right side beside it (third-angle projection). */
-export function overallSheet(result: PieceResult, spec: SheetSpec, units: DrawingUnits): SheetDraft {
+/**
+ * The overall views: top above front, right side beside it (third-angle projection) on one
+ * sheet; or, when that buys a larger scale, front and side on one sheet and the top on its own.
+ */
+export function overallSheets(result: PieceResult, spec: SheetSpec, units: DrawingUnits): SheetDraft[] {
   const front = overallView(result, 'front', units);
   const side = overallView(result, 'side', units);
   const top = overallView(result, 'top', units);
-  const views = fitArrangement(
+  const area = drawingArea(spec);
+  const together = fitArrangement(
     [{ view: front, place: 'anchor' }, { view: side, place: 'right' }, { view: top, place: 'above', offsetMm: top.bounds.x - front.bounds.x }],
-    drawingArea(spec), units,
+    area, units,
   );
-  return { ...emptySheet(spec, 'Overall views'), views };
+  const pair = fitArrangement([{ view: front, place: 'anchor' }, { view: side, place: 'right' }], area, units);
+  if (pair[0]!.scale >= together[0]!.scale) return [{ ...emptySheet(spec, 'Overall views'), views: together }];
+  const alone = fitArrangement([{ view: top, place: 'anchor' }], area, units);
+  return [{ ...emptySheet(spec, 'Overall views'), views: pair }, { ...emptySheet(spec, 'Top view'), views: alone }];
 }
 
 /** A sheet holding one overall view alone, for an SVG of that view. */
@@ -117,57 +114,6 @@ function explodedSheet(result: PieceResult, spec: SheetSpec, units: DrawingUnits
   return { ...emptySheet(spec, 'Exploded view', [legend], flowArea), views };
 }
 
-/** Lays out a part's three views: main scale for face and edge, the end view as large as fits. */
-function fitPartViews(part: Part, area: Rect, units: DrawingUnits, maxHeight: number): PlacedView[] {
-  const { face, edge, end } = partViews(part, units);
-  const scales = usualScales(units);
-  for (const s of scales) {
-    for (const e of scales.filter((x) => x <= s && x * 4 >= s)) {
-      const arrangement: Arrangement[] = [{ view: face, place: 'anchor' }, { view: edge, place: 'below' }, { view: end, place: 'right', scale: e }];
-      const { views, frame } = arrangeAt(arrangement, s);
-      if (frame.w <= area.w && frame.h <= area.h) return centreIn(views, frame, area, true);
-    }
-  }
-  // Nothing fits beside the cut table: let the views take the page down to the title block; the
-  // table then starts below them and continues on the next page.
-  for (const s of scales) {
-    const { views, frame } = arrangeAt([{ view: face, place: 'anchor' }, { view: edge, place: 'below' }, { view: end, place: 'right' }], s);
-    if ((frame.w <= area.w && frame.h <= maxHeight) || s === scales[scales.length - 1]) return centreIn(views, frame, area, true);
-  }
-  throw new Error('Assertion failed: usualScales is never empty');
-}
-
-function partSheet(part: Part, letter: string, spec: SheetSpec, units: DrawingUnits): SheetDraft {
-  const area = drawingArea(spec);
-  // The views get what the cut table and notes leave, so the page holds both without a continuation.
-  const flowNeed = (part.features.length ? TABLE_EXTRA_MM + part.features.length * TABLE_ROW_MM : 0) + (part.notes.length ? 10 + part.notes.length * 5 : 0);
-  const viewsH = Math.max((area.h - HEADING_MM) * PART_VIEWS_MIN_SHARE, area.h - HEADING_MM - flowNeed);
-  const viewsArea: Rect = { x: area.x, y: area.y + HEADING_MM, w: area.w, h: viewsH };
-  const views = fitPartViews(part, viewsArea, units, area.h - HEADING_MM);
-  const used = rectUnion(views.map((v) => v.frame));
-  const flowTop = used.y + used.h + 4;
-  const material = part.material.kind === 'solid' ? part.material.speciesName : part.material.sheetName;
-  const grain = part.grain === 'length' ? 'grain along the length' : part.grain === 'width' ? 'grain across the width' : 'sheet good';
-  const heading: Label[] = [
-    { type: 'label', at: [area.x, area.y + 5], text: `${letter}  ${part.name}`, sizePt: 13, anchor: 'start', font: 'sans', bold: true },
-    { type: 'label', at: [area.x, area.y + 10.5], text: `${part.quantity} off   finished ${partSizeText(part, units)}   ${material}, ${grain}${part.glueUp ? `, glued up from ${part.glueUp.boards} boards` : ''}`, sizePt: 8.5, anchor: 'start', font: 'mono' },
-  ];
-  const flow: FlowBlock[] = [];
-  if (part.features.length) {
-    flow.push({
-      type: 'table', title: 'Cuts on this part',
-      head: ['Cut', 'Where', 'Sizes', 'For'],
-      rows: part.features.map((f) => [featureKindText(f), featureFaceText(f), featureSizeText(f, units), f.label]),
-      numericColumns: [],
-    });
-  }
-  // Notes and the key to face names go under the heading, so the page never spills a line onto another.
-  const key = 'Faces A/B: broad faces; edges A/B: long edges; ends A/B: ends, end A at the left of the face view; offsets from the A side.';
-  heading.push({ type: 'label', at: [area.x, area.y + 14.5], text: part.notes.length ? `Notes: ${part.notes.map((n) => n.replace(/\.$/, '')).join('; ')}.  ${key}` : key, sizePt: 6.5, anchor: 'start', font: 'sans' });
-  const primitives: Primitive[] = [...heading];
-  return { ...emptySheet(spec, `Part ${letter}: ${part.name}`, flow, { x: area.x, y: flowTop, w: area.w, h: area.y + area.h - flowTop }), views, primitives };
-}
-
 /** Today's date as YYYY-MM-DD. */
 function today(): string {
   return new Date().toISOString().slice(0, 10);
@@ -181,7 +127,7 @@ export function buildPlanSet(result: PieceResult, opts: PlanSetOptions): PlanSet
   const flowSheet = (name: string, flow: readonly FlowBlock[]): SheetDraft => emptySheet(spec, name, flow);
 
   const body: SheetDraft[] = [
-    overallSheet(result, spec, units),
+    ...overallSheets(result, spec, units),
     explodedSheet(result, spec, units, letters),
     ...result.parts.map((p) => partSheet(p, letters.get(p.id)!, spec, units)),
     flowSheet('Cut list', cutListBlocks(result, units, letters)),
