@@ -116,7 +116,7 @@ describe('two saves from the same revision', () => {
     await mine.waitForURL((url) => url.pathname.startsWith('/designs/') && !url.pathname.endsWith(designId));
     const forkId = mine.url().split('/').pop()!;
     await mine.locator('table[aria-label="Cut list"]').waitFor();
-    await mine.getByText('forked from').waitFor();
+    await mine.getByText('forked from').first().waitFor();
     expect(await mine.getByLabel('Width over the legs', { exact: true }).inputValue()).toBe('38 1/2"');
     const fork = await head(mine, forkId);
     expect(fork.spec.params.width).toBeCloseTo(parseLength('38 1/2"'), 9);
