@@ -16,6 +16,7 @@ import { validateCabinetCombinations } from './pieces/cabinet.ts';
 import { DRESSER_PARAMS } from './pieces/dresserParams.ts';
 import { validateDresserCombinations } from './pieces/dresser.ts';
 import type { ParamValue, PieceKind, PieceSpec } from './types.ts';
+import { parseRoomSection } from '../room/parseRoom.ts';
 
 export type { ParamDef, ParamKind } from './paramDef.ts';
 
@@ -154,7 +155,12 @@ export function validateSpec(spec: unknown): PieceSpec {
   const climate = s.climate === undefined ? climateOf(DEFAULT_CLIMATE) : checkClimate(readClimate(s.climate));
   combinations(params, climate);
   const out: PieceSpec = { schemaVersion: 1, kind: s.kind as PieceKind, params, climate };
-  if (s.room !== undefined) out.room = s.room;
+  if (s.room !== undefined) {
+    // Checked here so a bad room is refused wherever a spec enters (API, file, editor), named
+    // by its path under `room`; kept as given so a maker's `12'` stays as typed.
+    parseRoomSection(s.room, 'room');
+    out.room = s.room;
+  }
   return out;
 }
 
