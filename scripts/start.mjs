@@ -62,8 +62,26 @@ if (runStep('migrating and seeding the database', ['--import', 'tsx', 'server/db
       if (!stopping) stopAll(code ?? 1);
     });
     api.stdout?.on('data', () => {});
-    setTimeout(() => printWelcome(), 1500);
+    waitUntilServing().then(printWelcome, (error) => {
+      process.stderr.write(`[start] ${error.message}\n`);
+      stopAll(1);
+    });
   }
+}
+
+/** Poll the API's health until it answers, so the welcome lines follow a server that is up. */
+async function waitUntilServing(timeoutMs = 60_000) {
+  const deadline = Date.now() + timeoutMs;
+  while (Date.now() < deadline) {
+    try {
+      const res = await fetch(`http://${HOST}:${PORT}/api/health`);
+      if (res.ok) return;
+    } catch {
+      // not listening yet
+    }
+    await new Promise((r) => setTimeout(r, 250));
+  }
+  throw new Error(`the server did not answer on http://${HOST}:${PORT}/api/health within ${timeoutMs / 1000} s`);
 }
 
 function printWelcome() {
