@@ -266,7 +266,7 @@ describe('the design editor', () => {
     await page.getByRole('button', { name: /^Fork r\d+/ }).click();
     await page.waitForURL((url) => url.pathname.startsWith('/designs/') && !url.pathname.endsWith(designId));
     forkId = page.url().split('/').pop() ?? '';
-    await page.getByText('forked from').waitFor();
+    await page.getByText('forked from').first().waitFor();
     expect(forkId).not.toBe(designId);
     await page.locator('table[aria-label="Cut list"]').waitFor();
     await shot('fork');
