@@ -20,6 +20,22 @@ const TABLE_4_2_AT_70F: ReadonlyArray<readonly [rh: number, emc: number]> = [
   [90, 20.5],
 ];
 
+// The rest of the same row, WH2010 Table 4-2 at 70 °F, recalled from memory (approximate, not
+// checked against a printed copy); kept apart from the confirmed points above so a reader can
+// tell them apart. 95 % RH is left out: the value remembered for it is too uncertain to test.
+const TABLE_4_2_AT_70F_FROM_MEMORY: ReadonlyArray<readonly [rh: number, emc: number]> = [
+  [5, 1.3],
+  [10, 2.5],
+  [15, 3.5],
+  [25, 5.4],
+  [35, 6.9],
+  [45, 8.5],
+  [55, 10.1],
+  [65, 12.0],
+  [75, 14.4],
+  [85, 17.9],
+];
+
 const SEVENTY_F_IN_C = ((70 - 32) * 5) / 9;
 
 describe('emcPercent', () => {
@@ -32,6 +48,16 @@ describe('emcPercent', () => {
     const emc = emcPercent({ temperature: SEVENTY_F_IN_C, temperatureUnit: 'C', relativeHumidityPercent: rh });
     expect(Math.abs(emc - published)).toBeLessThanOrEqual(TABLE_TOLERANCE_PP);
   });
+
+  it.each(TABLE_4_2_AT_70F_FROM_MEMORY)(
+    'matches WH2010 Table 4-2 at 70 °F and %i %% RH (%f %%, recalled from memory), both coefficient sets',
+    (rh, remembered) => {
+      const fahrenheit = emcPercent({ temperature: 70, temperatureUnit: 'F', relativeHumidityPercent: rh });
+      const celsius = emcPercent({ temperature: SEVENTY_F_IN_C, temperatureUnit: 'C', relativeHumidityPercent: rh });
+      expect(Math.abs(fahrenheit - remembered)).toBeLessThanOrEqual(TABLE_TOLERANCE_PP);
+      expect(Math.abs(celsius - remembered)).toBeLessThanOrEqual(TABLE_TOLERANCE_PP);
+    },
+  );
 
   it('is zero in perfectly dry air', () => {
     expect(emcPercent({ temperature: 70, temperatureUnit: 'F', relativeHumidityPercent: 0 })).toBe(0);
