@@ -1,6 +1,9 @@
 import { useEffect, useId, useRef, useState } from 'react';
+import { useParams } from 'react-router-dom';
 import type { PaperSize } from '../../shared/drawing/types.ts';
 import type { PieceResult } from '../../shared/engine/types.ts';
+import { useDesign } from '../api/useDesign.ts';
+import { usePriceList } from '../api/usePriceList.ts';
 import { exportFileStem, saveBlob } from '../export/download.ts';
 import type { SvgViewId } from '../export/viewSvg.ts';
 import { usePreferences } from '../state/usePreferences.ts';
@@ -30,6 +33,8 @@ function message(error: unknown): string {
  * The editor's Export menu: the plan set as a PDF (sheet size, orientation and units chosen
  * here, a progress bar while it draws), one SVG per view, the cut list as CSV and the spec as
  * JSON. `result` is null while the parameters do not build; nothing can be exported then.
+ * The plan set's materials pages are costed from the workshop's price list, read (from the
+ * query cache, as the editor already holds the design) through the design the route names.
  */
 export function ExportMenu({ result, title, revision, dirty, workshopName }: {
   result: PieceResult | null;
@@ -40,6 +45,9 @@ export function ExportMenu({ result, title, revision, dirty, workshopName }: {
   workshopName: string;
 }) {
   const preferredUnit = usePreferences((s) => s.unit);
+  const { designId } = useParams();
+  const design = useDesign(designId);
+  const prices = usePriceList(design.data?.workshopId);
   const [open, setOpen] = useState(false);
   const [units, setUnits] = useState<'in' | 'mm'>(preferredUnit);
   const [size, setSize] = useState<PaperSize | null>(null);
@@ -89,6 +97,7 @@ export function ExportMenu({ result, title, revision, dirty, workshopName }: {
       const { exportPlanSet } = await loadExports();
       const blob = await exportPlanSet(result, {
         title, revision: revisionText, workshopName, units, sheet: { size: sheetSize, orientation },
+        priceList: prices.data?.priceList ?? null,
         onProgress: (d, total) => setProgress({ done: d, total }),
       });
       saveBlob(blob, `${stem}-plan-set.pdf`);
@@ -148,6 +157,11 @@ export function ExportMenu({ result, title, revision, dirty, workshopName }: {
                 ))}
               </div>
             </div>
+            <p className="text-xs text-graphite-soft">
+              {prices.data?.priceList.items.length
+                ? `The materials page is costed from the workshop's price list (${prices.data.priceList.currency}).`
+                : prices.isPending && design.data ? 'Reading the workshop\'s price list…' : 'No price list in this workshop: the materials page lists what to buy without cost.'}
+            </p>
             <button type="button" className="btn btn-primary w-full justify-center" disabled={busy} onClick={() => void exportPdf()}>
               {busy ? 'Drawing the plan set…' : 'Download the plan set'}
             </button>

@@ -2,8 +2,11 @@
  * What the editor's Export menu calls. The plan set's PDF code (jsPDF, the font) loads only
  * when a plan set is exported; the SVG, CSV and JSON exports are small and synchronous.
  */
+import type { PlanSetOptions } from '../../shared/drawing/planSet.ts';
 import type { PaperSize, SheetSpec } from '../../shared/drawing/types.ts';
 import type { PieceResult, PieceSpec } from '../../shared/engine/types.ts';
+import type { PriceList } from '../../shared/materials/priceList.ts';
+import { extrasOf, suggestedQuantities } from '../materials/extras.ts';
 import { cutListCsv } from './cutListCsv.ts';
 import { specJson } from './specJson.ts';
 import { viewSvg, type SvgViewId } from './viewSvg.ts';
@@ -15,6 +18,8 @@ export interface ExportPlanSetOptions {
   workshopName: string;
   sheet: SheetSpec;
   units: 'in' | 'mm';
+  /** The workshop's price list; the materials pages are costed when it prices anything. */
+  priceList?: PriceList | null;
   /** Told after each sheet: sheets done of the total. */
   onProgress?: (done: number, total: number) => void;
 }
@@ -25,6 +30,18 @@ export function defaultSheet(units: 'in' | 'mm'): SheetSpec {
   return { size, orientation: 'landscape' };
 }
 
+/**
+ * What the plan set is built with: the title block's fields, and the workshop's price list with
+ * the hardware and finish the Materials page starts from (finish for the schedule's coats),
+ * when the list prices anything. An empty or missing list leaves the materials pages unpriced.
+ */
+export function planSetOptions(result: PieceResult, opts: ExportPlanSetOptions): PlanSetOptions {
+  const base: PlanSetOptions = { title: opts.title, revision: opts.revision, workshopName: opts.workshopName, sheet: opts.sheet, units: opts.units };
+  const list = opts.priceList;
+  if (!list || list.items.length === 0) return base;
+  return { ...base, materials: { priceList: list, extras: extrasOf(list, suggestedQuantities(result, list)) } };
+}
+
 /** The whole plan set as a PDF blob. */
 export async function exportPlanSet(result: PieceResult, opts: ExportPlanSetOptions): Promise<Blob> {
   const [{ buildPlanSet }, { renderPlanSetPdf }, { monoFontsBrowser }] = await Promise.all([
@@ -32,7 +49,7 @@ export async function exportPlanSet(result: PieceResult, opts: ExportPlanSetOpti
     import('./planSetPdf.ts'),
     import('./fontsBrowser.ts'),
   ]);
-  const model = buildPlanSet(result, { title: opts.title, revision: opts.revision, workshopName: opts.workshopName, sheet: opts.sheet, units: opts.units });
+  const model = buildPlanSet(result, planSetOptions(result, opts));
   opts.onProgress?.(0, model.sheets.length);
   const bytes = await renderPlanSetPdf(model, await monoFontsBrowser(), opts.onProgress);
   return new Blob([bytes], { type: 'application/pdf' });

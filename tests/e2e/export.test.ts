@@ -145,6 +145,13 @@ describe('the Export menu', () => {
     expect(pdfText).toContain('Safety notes');
   });
 
+  it('costs the materials from the workshop\'s price list (the demo workshop has one)', () => {
+    const materials = pdfText.split('\f').find((p) => p.includes('Shopping list'));
+    expect(materials, 'no materials page').toBeDefined();
+    expect(materials).toMatch(/Cost \(USD\)/);
+    expect(materials).toMatch(/Total\s+\$?[\d,]+\.\d\d/);
+  });
+
   it('embeds JetBrains Mono', () => {
     const fonts = execFileSync('pdffonts', [pdfPath], { encoding: 'utf8' });
     expect(fonts).toMatch(/JetBrainsMono\S*\s+CID TrueType\s+Identity-H\s+yes/);
