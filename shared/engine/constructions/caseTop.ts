@@ -5,7 +5,7 @@
  * through slots in the back stretcher sized by the wood library's fastener-slot rule.
  */
 import type { Climate } from '../../wood/climate.ts';
-import { fastenerSlotLength } from '../../wood/slots.ts';
+import { fastenerSlotMm } from '../../wood/slots.ts';
 import type { SpeciesId } from '../../wood/species.ts';
 import type { JointDraft, PartDraft } from '../assembly.ts';
 import { boxBetween } from '../geometry/box.ts';
@@ -38,7 +38,7 @@ export function stretcherFasteners(which: 'front' | 'back', stretcher: Box3, f: 
   const r = f.screwDiameterMm / 2;
   const distance = Math.abs(yc - f.fixedLineYMm);
   const slot = which === 'back' && f.species
-    ? fastenerSlotLength({ distanceFromFixedLineMm: distance, species: f.species, sawn: 'unknown', climate: f.climate, shankDiameterMm: f.screwDiameterMm })
+    ? fastenerSlotMm({ distanceFromFixedLineMm: distance, species: f.species, sawn: 'unknown', climate: f.climate, shankDiameterMm: f.screwDiameterMm })
     : null;
   return Array.from({ length: count }, (_, i) => {
     const x = sx0 + inset + ((length - 2 * inset) * i) / (count - 1);

@@ -5,7 +5,7 @@
  */
 import type { Climate } from '../../wood/climate.ts';
 import { panelFloat, type PanelFloat } from '../../wood/float.ts';
-import { planGlueUp } from '../../wood/glueUp.ts';
+import { glueUpBoardWidthsMm } from '../../wood/glueUp.ts';
 import { getSheetGood, type SheetGoodId } from '../../wood/sheetGoods.ts';
 import { sheetStiffness } from '../../wood/sheetStiffness.ts';
 import { getSpecies, type SpeciesId } from '../../wood/species.ts';
@@ -16,6 +16,7 @@ import { carcassBox } from '../constructions/carcassBox.ts';
 import { doorLeaf, hingeCentres, type DoorFrameSpec } from '../constructions/doorLeaf.ts';
 import { drawerBox, drawerNamer } from '../constructions/drawerBox.ts';
 import { faceFrame } from '../constructions/faceFrame.ts';
+import { frontGrainMatch } from '../constructions/frontGrid.ts';
 import { plainPart } from '../constructions/plainPart.ts';
 import { shelves as buildShelves, type HoleLine } from '../constructions/shelves.ts';
 import { SLIDE_RULES } from '../constructions/slides.ts';
@@ -87,8 +88,8 @@ export function buildCase(plan: CasePlan, extras: CaseExtras): CaseBuild {
   const checks: Check[] = [];
   const glueUpFor = (widthMm: number, boardMm: number): GlueUpPlan | undefined => {
     if (widthMm <= boardMm) return undefined;
-    const g = planGlueUp({ panelWidthMm: widthMm, maxBoardWidthMm: boardMm, arrangement: 'equal', species: species.id, sawn: 'unknown', climate: plan.climate });
-    return { boards: g.boardCount, boardWidthMm: g.boardWidthsMm[0]! };
+    const widths = glueUpBoardWidthsMm({ panelWidthMm: widthMm, maxBoardWidthMm: boardMm, arrangement: 'equal' });
+    return { boards: widths.length, boardWidthMm: widths[0]! };
   };
 
   // Shelves first: their dadoes and pin holes go into the carcass sides.
@@ -186,6 +187,7 @@ export function buildCase(plan: CasePlan, extras: CaseExtras): CaseBuild {
         group: 'drawer/face', member, label: `drawer front, ${where}`, role: 'drawer-front', material: solid, grain: 'length',
         world: boxBetween([fb.x[0], fb.y[0], fb.z[0]], [fb.x[1], fb.y[1], fb.z[1]]), axes: { length: '+X', width: '+Z', thickness: '-Y' },
         explodeMm: [0, -2.5 * explodeMm * 0.4, 0], name: drawerNamer('drawer-front', 'Drawer front'), ...(glueUp ? { glueUp } : {}),
+        grainMatch: frontGrainMatch(fb, plan.columns),
         notes: [`Screwed to the box from inside; ${p.frontMount === 'inset' ? 'set it in its opening with an even reveal' : 'centre it over the opening'} before driving the screws.`],
       });
       const box = drawerBox({

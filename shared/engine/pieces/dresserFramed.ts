@@ -8,7 +8,7 @@
 import { InputError } from '../../errors.ts';
 import type { Climate } from '../../wood/climate.ts';
 import { panelFloat, type PanelFloat } from '../../wood/float.ts';
-import { planGlueUp } from '../../wood/glueUp.ts';
+import { glueUpBoardWidthsMm } from '../../wood/glueUp.ts';
 import { getSheetGood, type SheetGoodId } from '../../wood/sheetGoods.ts';
 import { getSpecies } from '../../wood/species.ts';
 import { assemble, type JointDraft, type PartDraft } from '../assembly.ts';
@@ -16,7 +16,7 @@ import { caseTop, stretcherFasteners } from '../constructions/caseTop.ts';
 import { cornerLegs } from '../constructions/cornerLegs.ts';
 import { drawerBox, drawerNamer } from '../constructions/drawerBox.ts';
 import { frameAndPanelFace, type FacePanelSpec } from '../constructions/frameAndPanelFace.ts';
-import { frontGrid, type FrameWidths, type FrontGrid } from '../constructions/frontGrid.ts';
+import { frontGrainMatch, frontGrid, type FrameWidths, type FrontGrid } from '../constructions/frontGrid.ts';
 import { plainPart } from '../constructions/plainPart.ts';
 import { SLIDE_RULES } from '../constructions/slides.ts';
 import { webFrame } from '../constructions/webFrame.ts';
@@ -234,8 +234,8 @@ export function buildFramedDresser(p: P, top: TopPlan, d: DrawerPlan, rows: numb
   // Top.
   const topBox = boxBetween([-top.overhang.side, -top.overhang.front, p.height - top.thicknessMm], [p.width + top.overhang.side, p.depth + top.overhang.back, p.height]);
   const topDepth = boxSize(topBox)[1];
-  const glue = top.material === 'solid' && topDepth > top.boardWidthMm ? planGlueUp({ panelWidthMm: topDepth, maxBoardWidthMm: top.boardWidthMm, arrangement: 'equal', species: species.id, sawn: 'unknown', climate }) : null;
-  const topBuilt = caseTop({ box: topBox, material: top.material === 'solid' ? solid : sheet(p.carcassSheet), ...(glue ? { glueUp: { boards: glue.boardCount, boardWidthMm: glue.boardWidthsMm[0]! } } : {}), stretchers: [frames[0]!.frontRail, frames[0]!.backRail], explodeMm });
+  const glue = top.material === 'solid' && topDepth > top.boardWidthMm ? glueUpBoardWidthsMm({ panelWidthMm: topDepth, maxBoardWidthMm: top.boardWidthMm, arrangement: 'equal' }) : null;
+  const topBuilt = caseTop({ box: topBox, material: top.material === 'solid' ? solid : sheet(p.carcassSheet), ...(glue ? { glueUp: { boards: glue.length, boardWidthMm: glue[0]! } } : {}), stretchers: [frames[0]!.frontRail, frames[0]!.backRail], explodeMm });
   drafts.push(...topBuilt.drafts);
   joints.push(...topBuilt.joints);
 
@@ -252,6 +252,7 @@ export function buildFramedDresser(p: P, top: TopPlan, d: DrawerPlan, rows: numb
       group: 'drawer/face', member: `row-${dl.row + 1}`, label: `drawer front, ${where}`, role: 'drawer-front', material: solid, grain: 'length',
       world: boxBetween([fb.x[0], fb.y[0], fb.z[0]], [fb.x[1], fb.y[1], fb.z[1]]), axes: { length: '+X', width: '+Z', thickness: '-Y' },
       explodeMm: [0, -explodeMm, 0], name: drawerNamer('drawer-front', 'Drawer front'), notes: ['Screwed to the box from inside.'],
+      grainMatch: frontGrainMatch(fb, columns),
     });
     const box = drawerBox({
       box: boxBetween([dl.box.x[0], dl.box.y[0], dl.box.z[0]], [dl.box.x[1], dl.box.y[1], dl.box.z[1]]), row: dl.row + 1, where, stock,
