@@ -4,6 +4,14 @@ import type { ParamValue } from './types.ts';
 /** How a parameter is entered and checked. */
 export type ParamKind = 'length' | 'number' | 'percent' | 'enum' | 'boolean' | 'species' | 'sheet';
 
+/**
+ * One condition on another parameter of the same piece: its value is one of `is`, or (numbers)
+ * at least `atLeast`. Plain data, so definitions stay serialisable.
+ */
+export type ParamCondition =
+  | { param: string; is: readonly (string | number | boolean)[] }
+  | { param: string; atLeast: number };
+
 /** One parameter of a piece kind. Lengths are in mm (defaults, min and max alike). */
 export interface ParamDef {
   key: string;
@@ -24,4 +32,10 @@ export interface ParamDef {
   options?: readonly { value: string; label: string }[];
   /** One sentence on what it does and a sensible value. */
   help?: string;
+  /**
+   * When the parameter means anything: a form shows it only while every condition holds (e.g.
+   * the listed row heights only when the heights are listed). Absent: always shown. A hidden
+   * parameter keeps its value and is still checked by the engine's range check.
+   */
+  shownWhen?: readonly ParamCondition[];
 }

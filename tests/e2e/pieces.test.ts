@@ -101,6 +101,14 @@ describe('dressers and cabinets in the editor', () => {
     expect(await page.getByRole('heading', { level: 1 }).innerText()).toContain('Chest of drawers for the guest room');
     // The drawer groups of the form come from the engine's metadata.
     await page.locator('form[aria-label="Parameters"] summary', { hasText: 'Drawers' }).first().waitFor();
+    // The listed row heights appear only once the heights are listed, one for each row above the bottom.
+    const form = page.locator('form[aria-label="Parameters"]');
+    expect(await form.getByLabel(/^Listed height, row/).count()).toBe(0);
+    await form.getByLabel('Drawer heights', { exact: true }).selectOption('listed');
+    await form.getByLabel('Listed height, row 1 (top)').waitFor();
+    expect(await form.getByLabel(/^Listed height, row/).count()).toBe(Number(defaultSpec('dresser').params.drawerRows) - 1);
+    await form.getByLabel('Drawer heights', { exact: true }).selectOption('arithmetic');
+    expect(await form.getByLabel(/^Listed height, row/).count()).toBe(0);
     expect((await canvasLook()).inked).toBeGreaterThan(0.05);
     await page.screenshot({ path: join(SCREENSHOT_DIR, 'dresser-editor.png') });
   });
@@ -112,6 +120,14 @@ describe('dressers and cabinets in the editor', () => {
     const door = built.parts.find((p) => /door/.test(p.id));
     expect(door).toBeDefined();
     await page.locator(`table[aria-label="Cut list"] tr[data-part-row="${door!.id}"]`).waitFor();
+    // With no doors, the door style and sizes leave the form.
+    const form = page.locator('form[aria-label="Parameters"]');
+    expect(await form.getByLabel('Door style').count()).toBe(1);
+    await form.getByLabel('Doors', { exact: true }).fill('0');
+    await expect.poll(() => form.getByLabel('Door style').count()).toBe(0);
+    expect(await form.getByLabel('Door stile width').count()).toBe(0);
+    await form.getByLabel('Doors', { exact: true }).fill('2');
+    await form.getByLabel('Door style').waitFor();
     expect((await canvasLook()).inked).toBeGreaterThan(0.05);
     await page.screenshot({ path: join(SCREENSHOT_DIR, 'cabinet-editor.png') });
   });

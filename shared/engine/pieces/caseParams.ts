@@ -24,19 +24,19 @@ export const CARCASS_PARAMS: readonly ParamDef[] = [
   { key: 'carcassSheet', label: 'Carcass sheet', group: GROUPS.carcass, kind: 'sheet', default: 'hardwood-plywood-3/4', options: sheetChoice(), help: 'Sides, bottom, top or stretchers, dividers.' },
   { key: 'backSheet', label: 'Back sheet', group: GROUPS.carcass, kind: 'sheet', default: 'hardwood-plywood-1/4', options: sheetChoice() },
   { key: 'backFit', label: 'Back held in', group: GROUPS.carcass, kind: 'enum', default: 'rabbet', options: [{ value: 'rabbet', label: 'Rabbets in the sides (glued and pinned)' }, { value: 'groove', label: 'Grooves set in from the back (slides in)' }] },
-  { key: 'backGrooveSetIn', label: 'Wood behind the back groove', group: GROUPS.carcass, kind: 'length', default: 0.375 * IN, min: 3, max: 40, help: 'Used when the back sits in grooves.' },
+  { key: 'backGrooveSetIn', label: 'Wood behind the back groove', group: GROUPS.carcass, kind: 'length', default: 0.375 * IN, min: 3, max: 40, help: 'Used when the back sits in grooves.', shownWhen: [{ param: 'backFit', is: ['groove'] }] },
   { key: 'carcassJoinery', label: 'Top and bottom joined to the sides with', group: GROUPS.carcass, kind: 'enum', default: 'dado', options: [{ value: 'dado', label: 'Dadoes, set in from the ends' }, { value: 'rabbet', label: 'Rabbets at the ends' }] },
   { key: 'jointDepth', label: 'Dado and rabbet depth', group: GROUPS.carcass, kind: 'length', default: 0.25 * IN, min: 2, max: 15, help: 'About a third of the sheet: 1/4 in in 3/4 in plywood.' },
-  { key: 'dadoEndWall', label: 'Dado set in from the ends', group: GROUPS.carcass, kind: 'length', default: 0.5 * IN, min: 3, max: 100, help: 'Wood left beyond the top and bottom dadoes, so the ends do not break out.' },
+  { key: 'dadoEndWall', label: 'Dado set in from the ends', group: GROUPS.carcass, kind: 'length', default: 0.5 * IN, min: 3, max: 100, help: 'Wood left beyond the top and bottom dadoes, so the ends do not break out.', shownWhen: [{ param: 'carcassJoinery', is: ['dado'] }] },
 ];
 
 /** Face frame. */
 export const FACE_FRAME_PARAMS: readonly ParamDef[] = [
   { key: 'faceFrame', label: 'Face frame', group: GROUPS.faceFrame, kind: 'boolean', default: true, help: 'Off: frameless, with edge-banded front edges and full-overlay fronts.' },
-  { key: 'faceFrameThickness', label: 'Face-frame thickness', group: GROUPS.faceFrame, kind: 'length', default: 0.75 * IN, min: 12, max: 32 },
-  { key: 'faceFrameStile', label: 'Face-frame stile width', group: GROUPS.faceFrame, kind: 'length', default: 1.5 * IN, min: 19, max: 150 },
-  { key: 'faceFrameTopRail', label: 'Face-frame top rail width', group: GROUPS.faceFrame, kind: 'length', default: 1.5 * IN, min: 19, max: 150 },
-  { key: 'faceFrameBottomRail', label: 'Face-frame bottom rail width', group: GROUPS.faceFrame, kind: 'length', default: 1.5 * IN, min: 19, max: 150 },
+  { key: 'faceFrameThickness', label: 'Face-frame thickness', group: GROUPS.faceFrame, kind: 'length', default: 0.75 * IN, min: 12, max: 32, shownWhen: [{ param: 'faceFrame', is: [true] }] },
+  { key: 'faceFrameStile', label: 'Face-frame stile width', group: GROUPS.faceFrame, kind: 'length', default: 1.5 * IN, min: 19, max: 150, shownWhen: [{ param: 'faceFrame', is: [true] }] },
+  { key: 'faceFrameTopRail', label: 'Face-frame top rail width', group: GROUPS.faceFrame, kind: 'length', default: 1.5 * IN, min: 19, max: 150, shownWhen: [{ param: 'faceFrame', is: [true] }] },
+  { key: 'faceFrameBottomRail', label: 'Face-frame bottom rail width', group: GROUPS.faceFrame, kind: 'length', default: 1.5 * IN, min: 19, max: 150, shownWhen: [{ param: 'faceFrame', is: [true] }] },
   { key: 'faceFrameMidRail', label: 'Face-frame rail between rows', group: GROUPS.faceFrame, kind: 'length', default: 2 * IN, min: 12, max: 150 },
   { key: 'faceFrameMullion', label: 'Face-frame mullion width', group: GROUPS.faceFrame, kind: 'length', default: 2 * IN, min: 19, max: 150, help: 'Between columns of drawers; wide enough to cover a divider.' },
 ];
@@ -44,8 +44,8 @@ export const FACE_FRAME_PARAMS: readonly ParamDef[] = [
 /** How doors and drawer fronts sit. */
 export const FRONT_PARAMS: readonly ParamDef[] = [
   { key: 'frontMount', label: 'Fronts', group: GROUPS.fronts, kind: 'enum', default: 'overlay', options: [{ value: 'overlay', label: 'Overlay (lap the frame)' }, { value: 'inset', label: 'Inset (inside the openings, face frame only)' }] },
-  { key: 'overlay', label: 'Overlay on the face frame', group: GROUPS.fronts, kind: 'length', default: 0.5 * IN, min: 0, max: 50, help: 'How far an overlay front laps the frame at each edge.' },
-  { key: 'reveal', label: 'Inset reveal', group: GROUPS.fronts, kind: 'length', default: 0.0625 * IN, min: 0, max: 10, help: 'Gap all round an inset front.' },
+  { key: 'overlay', label: 'Overlay on the face frame', group: GROUPS.fronts, kind: 'length', default: 0.5 * IN, min: 0, max: 50, help: 'How far an overlay front laps the frame at each edge.', shownWhen: [{ param: 'frontMount', is: ['overlay'] }] },
+  { key: 'reveal', label: 'Inset reveal', group: GROUPS.fronts, kind: 'length', default: 0.0625 * IN, min: 0, max: 10, help: 'Gap all round an inset front.', shownWhen: [{ param: 'frontMount', is: ['inset'] }] },
   { key: 'frontGap', label: 'Gap between fronts', group: GROUPS.fronts, kind: 'length', default: 0.125 * IN, min: 0, max: 20, help: 'Between the leaves of a pair, and between frameless fronts.' },
   { key: 'frontThickness', label: 'Front thickness', group: GROUPS.fronts, kind: 'length', default: 0.75 * IN, min: 12, max: 40 },
 ];
@@ -53,9 +53,9 @@ export const FRONT_PARAMS: readonly ParamDef[] = [
 /** Base. */
 export const BASE_PARAMS = (defaultType: string, defaultHeight: number): readonly ParamDef[] => [
   { key: 'baseType', label: 'Base', group: GROUPS.base, kind: 'enum', default: defaultType, options: [{ value: 'toe-kick', label: 'Toe kick (set back)' }, { value: 'plinth', label: 'Plinth (flush)' }, { value: 'legs', label: 'Square feet' }, { value: 'none', label: 'None' }] },
-  { key: 'baseHeight', label: 'Base height', group: GROUPS.base, kind: 'length', default: defaultHeight, min: 0, max: 300, help: 'A toe kick is commonly about 4 in high.' },
-  { key: 'toeKickSetback', label: 'Toe kick depth', group: GROUPS.base, kind: 'length', default: 3 * IN, min: 0, max: 200, help: 'How far the kick board stands back from the front.' },
-  { key: 'footSize', label: 'Foot size (square)', group: GROUPS.base, kind: 'length', default: 2 * IN, min: 25, max: 150 },
+  { key: 'baseHeight', label: 'Base height', group: GROUPS.base, kind: 'length', default: defaultHeight, min: 0, max: 300, help: 'A toe kick is commonly about 4 in high.', shownWhen: [{ param: 'baseType', is: ['toe-kick', 'plinth', 'legs'] }] },
+  { key: 'toeKickSetback', label: 'Toe kick depth', group: GROUPS.base, kind: 'length', default: 3 * IN, min: 0, max: 200, help: 'How far the kick board stands back from the front.', shownWhen: [{ param: 'baseType', is: ['toe-kick'] }] },
+  { key: 'footSize', label: 'Foot size (square)', group: GROUPS.base, kind: 'length', default: 2 * IN, min: 25, max: 150, shownWhen: [{ param: 'baseType', is: ['legs'] }] },
 ];
 
 /** Wood, finish, milling. */

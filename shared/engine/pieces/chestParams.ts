@@ -49,9 +49,9 @@ export const CHEST_PARAMS: readonly ParamDef[] = [
   { key: 'backGrooveOffset', label: 'Back groove offset', group: JOINERY, kind: 'length', default: 0, min: -40, max: 40, help: 'Moves the groove that takes the back frame toward the back face (positive), so the back rail lines up with the hinges.' },
 
   { key: 'panelMaterial', label: 'Panel material', group: PANELS, kind: 'enum', default: 'plywood', options: [{ value: 'plywood', label: 'Plywood or MDF (sheet)' }, { value: 'solid', label: 'Solid wood, floating' }] },
-  { key: 'panelSheet', label: 'Panel sheet', group: PANELS, kind: 'sheet', default: 'hardwood-plywood-1/2', options: sheetChoice(), help: 'Used when the panels are sheet goods; a panel thicker than the groove is rabbeted to a tongue.' },
-  { key: 'panelThickness', label: 'Solid panel thickness', group: PANELS, kind: 'length', default: 0.5 * IN, min: 3, max: 30, help: 'Used when the panels are solid wood.' },
-  { key: 'panelGrain', label: 'Solid panel grain', group: PANELS, kind: 'enum', default: 'horizontal', options: [{ value: 'horizontal', label: 'Horizontal (moves up and down)' }, { value: 'vertical', label: 'Vertical (moves side to side)' }] },
+  { key: 'panelSheet', label: 'Panel sheet', group: PANELS, kind: 'sheet', default: 'hardwood-plywood-1/2', options: sheetChoice(), help: 'Used when the panels are sheet goods; a panel thicker than the groove is rabbeted to a tongue.', shownWhen: [{ param: 'panelMaterial', is: ['plywood'] }] },
+  { key: 'panelThickness', label: 'Solid panel thickness', group: PANELS, kind: 'length', default: 0.5 * IN, min: 3, max: 30, help: 'Used when the panels are solid wood.', shownWhen: [{ param: 'panelMaterial', is: ['solid'] }] },
+  { key: 'panelGrain', label: 'Solid panel grain', group: PANELS, kind: 'enum', default: 'horizontal', options: [{ value: 'horizontal', label: 'Horizontal (moves up and down)' }, { value: 'vertical', label: 'Vertical (moves side to side)' }], shownWhen: [{ param: 'panelMaterial', is: ['solid'] }] },
 
   { key: 'bottomSheet', label: 'Bottom sheet', group: BOTTOM, kind: 'sheet', default: 'hardwood-plywood-1/2', options: sheetChoice() },
   { key: 'cleatWidth', label: 'Cleat height', group: BOTTOM, kind: 'length', default: 0.75 * IN, min: 10, max: 80, help: 'Vertical size of the cleats the bottom rests on.' },
@@ -64,9 +64,9 @@ export const CHEST_PARAMS: readonly ParamDef[] = [
   { key: 'lidOverhangBack', label: 'Lid overhang, back', group: LID, kind: 'length', default: 0.25 * IN, min: 0, max: 50 },
   { key: 'lidBoardWidth', label: 'Lid board width', group: LID, kind: 'length', default: 5 * IN, min: 50, max: 300, help: 'Widest board in the lid glue-up; narrower boards stay flatter.' },
   { key: 'battenCount', label: 'Lid battens', group: LID, kind: 'number', default: 2, min: 0, max: 6, integer: true },
-  { key: 'battenWidth', label: 'Batten width', group: LID, kind: 'length', default: 2 * IN, min: 20, max: 150 },
-  { key: 'battenThickness', label: 'Batten thickness', group: LID, kind: 'length', default: 0.75 * IN, min: 10, max: 50 },
-  { key: 'battenSlots', label: 'Battens screwed through slots', group: LID, kind: 'boolean', default: true, help: 'Slots let the lid move across its grain; round holes split it.' },
+  { key: 'battenWidth', label: 'Batten width', group: LID, kind: 'length', default: 2 * IN, min: 20, max: 150, shownWhen: [{ param: 'battenCount', atLeast: 1 }] },
+  { key: 'battenThickness', label: 'Batten thickness', group: LID, kind: 'length', default: 0.75 * IN, min: 10, max: 50, shownWhen: [{ param: 'battenCount', atLeast: 1 }] },
+  { key: 'battenSlots', label: 'Battens screwed through slots', group: LID, kind: 'boolean', default: true, help: 'Slots let the lid move across its grain; round holes split it.', shownWhen: [{ param: 'battenCount', atLeast: 1 }] },
   { key: 'screwDiameter', label: 'Screw shank diameter', group: LID, kind: 'length', default: 4.2, min: 2, max: 10, help: 'Screws through the battens and cleats (a #8 wood screw is about 4.2 mm, from memory, approximate).' },
 
   { key: 'hingeType', label: 'Hinge type', group: HARDWARE, kind: 'enum', default: 'lid-support', options: [{ value: 'lid-support', label: 'Lid-support hinges (hold the lid at any angle)' }, { value: 'butt', label: 'Butt hinges (need a separate lid support)' }] },
@@ -75,11 +75,11 @@ export const CHEST_PARAMS: readonly ParamDef[] = [
   { key: 'hingeLeafWidth', label: 'Hinge leaf width', group: HARDWARE, kind: 'length', default: 0.625 * IN, min: 5, max: 60 },
   { key: 'hingeLeafThickness', label: 'Hinge leaf thickness', group: HARDWARE, kind: 'length', default: 2, min: 0.5, max: 6 },
   { key: 'hingeRecess', label: 'Hinge leaves let into', group: HARDWARE, kind: 'enum', default: 'lid', options: [{ value: 'lid', label: 'The lid (both leaves)' }, { value: 'back-rail', label: 'The back rail (both leaves)' }, { value: 'both', label: 'One leaf each' }, { value: 'none', label: 'Not recessed' }] },
-  { key: 'hingeTorqueRatingNm', label: 'Lid-support rating per hinge', group: HARDWARE, kind: 'number', default: 0, min: 0, max: 200, unit: 'N·m', help: 'From the hinge maker; 0 if not known yet — the engine then says what each hinge must hold.' },
+  { key: 'hingeTorqueRatingNm', label: 'Lid-support rating per hinge', group: HARDWARE, kind: 'number', default: 0, min: 0, max: 200, unit: 'N·m', help: 'From the hinge maker; 0 if not known yet — the engine then says what each hinge must hold.', shownWhen: [{ param: 'hingeType', is: ['lid-support'] }] },
 
   { key: 'fingerNotch', label: 'Finger notch in the front rail', group: LID, kind: 'boolean', default: true },
-  { key: 'fingerNotchWidth', label: 'Finger notch width', group: LID, kind: 'length', default: 3 * IN, min: 20, max: 300 },
-  { key: 'fingerNotchDepth', label: 'Finger notch depth', group: LID, kind: 'length', default: 0.375 * IN, min: 3, max: 40 },
+  { key: 'fingerNotchWidth', label: 'Finger notch width', group: LID, kind: 'length', default: 3 * IN, min: 20, max: 300, shownWhen: [{ param: 'fingerNotch', is: [true] }] },
+  { key: 'fingerNotchDepth', label: 'Finger notch depth', group: LID, kind: 'length', default: 0.375 * IN, min: 3, max: 40, shownWhen: [{ param: 'fingerNotch', is: [true] }] },
 
   { key: 'species', label: 'Species', group: WOOD, kind: 'species', default: 'white-oak' },
   { key: 'childAccess', label: 'A child could reach it', group: WOOD, kind: 'boolean', default: true, help: 'Shows the lid-support, ventilation and no-latch cautions.' },

@@ -6,7 +6,7 @@
  * stock, a 1/4 in plywood bottom in a 1/4 in deep groove 1/2 in up, drawer rows growing 1 in each
  * row down.
  */
-import type { ParamDef } from '../paramDef.ts';
+import type { ParamCondition, ParamDef } from '../paramDef.ts';
 import { CHEST_PARAMS } from './chestParams.ts';
 import { BASE_PARAMS, CARCASS_PARAMS, FACE_FRAME_PARAMS, FRONT_PARAMS, GROUPS, IN, MILLING_PARAMS, sheetChoice, WOOD_PARAMS, type CaseParams } from './caseParams.ts';
 
@@ -16,12 +16,17 @@ export const MAX_DRAWER_ROWS = 8;
 const rowHeights: ParamDef[] = Array.from({ length: MAX_DRAWER_ROWS }, (_, i) => ({
   key: `rowHeight${i + 1}`, label: `Listed height, row ${i + 1}${i === 0 ? ' (top)' : ''}`, group: GROUPS.heights, kind: 'length' as const,
   default: (5 + i) * IN, min: 25, max: 1000, help: 'Used when the heights are listed: each row\'s opening, top first; the bottom row takes what is left.',
+  shownWhen: [{ param: 'drawerGraduation', is: ['listed'] }, { param: 'drawerRows', atLeast: i + 2 }],
 }));
 
 const FRAMED = 'Frame-and-panel case';
+/** Shown only for a dresser built like the chest; the carcass-only settings only for a carcass. */
+const FRAMED_CASE = { param: 'caseConstruction', is: ['frame-and-panel'] } as const;
+const CARCASS_CASE = { param: 'caseConstruction', is: ['carcass'] } as const;
+const onlyFor = (condition: ParamCondition) => (def: ParamDef): ParamDef => ({ ...def, shownWhen: [...(def.shownWhen ?? []), condition] });
 /** The chest's own frame-and-panel parameters, for a dresser built like the chest. */
 const FRAMED_KEYS = ['legSize', 'footHeight', 'stockThickness', 'topRailWidth', 'bottomRailWidth', 'sideStileCount', 'stileWidth', 'grooveWidth', 'legGrooveDepth', 'frameGrooveDepth', 'railTongueLength', 'tongueClearance', 'legGrooveStop', 'panelMaterial', 'panelSheet', 'panelThickness', 'panelGrain'];
-const framedParams: ParamDef[] = FRAMED_KEYS.map((key) => ({ ...CHEST_PARAMS.find((d) => d.key === key)!, group: FRAMED }));
+const framedParams: ParamDef[] = FRAMED_KEYS.map((key) => ({ ...onlyFor(FRAMED_CASE)(CHEST_PARAMS.find((d) => d.key === key)!), group: FRAMED }));
 
 /** Every dresser parameter, in form order. */
 export const DRESSER_PARAMS: readonly ParamDef[] = [
@@ -41,13 +46,13 @@ export const DRESSER_PARAMS: readonly ParamDef[] = [
   { key: 'drawerBottomGroove', label: 'Bottom groove depth', group: GROUPS.drawers, kind: 'length', default: 0.25 * IN, min: 2, max: 12 },
   { key: 'drawerBottomSetUp', label: 'Bottom set up from the lower edge', group: GROUPS.drawers, kind: 'length', default: 0.5 * IN, min: 3, max: 40, help: 'Undermount slides want about 1/2 in.' },
   { key: 'drawerTopClearance', label: 'Clearance above the box', group: GROUPS.drawers, kind: 'length', default: 0.5 * IN, min: 0, max: 50 },
-  { key: 'drawerBottomClearance', label: 'Clearance below the box', group: GROUPS.drawers, kind: 'length', default: 0.25 * IN, min: 0, max: 50, help: 'Not used on wooden runners: the box rides on them.' },
+  { key: 'drawerBottomClearance', label: 'Clearance below the box', group: GROUPS.drawers, kind: 'length', default: 0.25 * IN, min: 0, max: 50, help: 'Not used on wooden runners: the box rides on them.', shownWhen: [{ param: 'slideType', is: ['side-mount', 'undermount'] }] },
   { key: 'drawerDepth', label: 'Drawer box depth', group: GROUPS.drawers, kind: 'length', default: 0, min: 0, max: 900, help: '0: the longest slide that fits.' },
   { key: 'drawerRearClearance', label: 'Clearance behind the box', group: GROUPS.drawers, kind: 'length', default: 1 * IN, min: 0, max: 200 },
 
   { key: 'drawerGraduation', label: 'Drawer heights', group: GROUPS.heights, kind: 'enum', default: 'arithmetic', options: [{ value: 'equal', label: 'Equal' }, { value: 'arithmetic', label: 'Growing by a step' }, { value: 'geometric', label: 'Growing by a ratio' }, { value: 'listed', label: 'Listed' }] },
-  { key: 'graduationStep', label: 'Step between rows', group: GROUPS.heights, kind: 'length', default: 1 * IN, min: 0, max: 200, help: 'Each row this much taller than the one above.' },
-  { key: 'graduationRatio', label: 'Ratio between rows', group: GROUPS.heights, kind: 'number', default: 1.15, min: 1, max: 2, help: 'Each row this many times the one above.' },
+  { key: 'graduationStep', label: 'Step between rows', group: GROUPS.heights, kind: 'length', default: 1 * IN, min: 0, max: 200, help: 'Each row this much taller than the one above.', shownWhen: [{ param: 'drawerGraduation', is: ['arithmetic'] }] },
+  { key: 'graduationRatio', label: 'Ratio between rows', group: GROUPS.heights, kind: 'number', default: 1.15, min: 1, max: 2, help: 'Each row this many times the one above.', shownWhen: [{ param: 'drawerGraduation', is: ['geometric'] }] },
   ...rowHeights,
 
   { key: 'topMaterial', label: 'Top', group: GROUPS.top, kind: 'enum', default: 'solid', options: [{ value: 'solid', label: 'Solid wood, glued up' }, { value: 'sheet', label: 'Carcass sheet, edge-banded' }] },
@@ -55,17 +60,17 @@ export const DRESSER_PARAMS: readonly ParamDef[] = [
   { key: 'topOverhangFront', label: 'Top overhang, front', group: GROUPS.top, kind: 'length', default: 1 * IN, min: 0, max: 100, help: 'Measured from the face frame (or carcass edge).' },
   { key: 'topOverhangSide', label: 'Top overhang, each side', group: GROUPS.top, kind: 'length', default: 0.75 * IN, min: 0, max: 100 },
   { key: 'topOverhangBack', label: 'Top overhang, back', group: GROUPS.top, kind: 'length', default: 0, min: 0, max: 50 },
-  { key: 'topBoardWidth', label: 'Top board width', group: GROUPS.top, kind: 'length', default: 6 * IN, min: 50, max: 300 },
+  { key: 'topBoardWidth', label: 'Top board width', group: GROUPS.top, kind: 'length', default: 6 * IN, min: 50, max: 300, shownWhen: [{ param: 'topMaterial', is: ['solid'] }] },
   { key: 'stretcherWidth', label: 'Stretcher width', group: GROUPS.top, kind: 'length', default: 3 * IN, min: 40, max: 200, help: 'Front and back stretchers the top is screwed to.' },
 
   ...framedParams,
-  { key: 'webFrameRailDepth', label: 'Web-frame rail depth', group: FRAMED, kind: 'length', default: 3 * IN, min: 25, max: 200, help: 'Front to back size of the web frames\' front and back rails; deeper than the legs.' },
-  { key: 'runnerWidth', label: 'Side runner width', group: FRAMED, kind: 'length', default: 1.5 * IN, min: 15, max: 100 },
+  { key: 'webFrameRailDepth', label: 'Web-frame rail depth', group: FRAMED, kind: 'length', default: 3 * IN, min: 25, max: 200, help: 'Front to back size of the web frames\' front and back rails; deeper than the legs.', shownWhen: [FRAMED_CASE] },
+  { key: 'runnerWidth', label: 'Side runner width', group: FRAMED, kind: 'length', default: 1.5 * IN, min: 15, max: 100, shownWhen: [FRAMED_CASE] },
 
   ...CARCASS_PARAMS,
   ...FACE_FRAME_PARAMS,
   ...FRONT_PARAMS,
-  ...BASE_PARAMS('plinth', 4 * IN),
+  ...BASE_PARAMS('plinth', 4 * IN).map(onlyFor(CARCASS_CASE)),
   ...WOOD_PARAMS('black-cherry', 'clear'),
   ...MILLING_PARAMS,
 ];
