@@ -4,7 +4,7 @@
  */
 import { InputError } from '../errors.ts';
 import { deriveOutputs } from './derived/index.ts';
-import { validateSpec } from './params.ts';
+import { checkSpecForBuild } from './params.ts';
 import { buildCabinet } from './pieces/cabinet.ts';
 import { buildChest } from './pieces/chest.ts';
 import { buildDresser } from './pieces/dresser.ts';
@@ -32,11 +32,11 @@ let last: { spec: PieceSpec; result: PieceResult } | null = null;
  */
 export function buildPiece(spec: PieceSpec): PieceResult {
   if (last?.spec === spec) return last.result;
-  const checked = validateSpec(spec);
+  const { spec: checked, chestLayout } = checkSpecForBuild(spec);
   let built;
   switch (checked.kind) {
     case 'chest':
-      built = buildChest(checked);
+      built = buildChest(checked, chestLayout);
       break;
     case 'dresser':
       built = buildDresser(checked);

@@ -11,6 +11,7 @@ import { isSpeciesId, SPECIES_IDS } from '../wood/species.ts';
 import type { ParamDef } from './paramDef.ts';
 import { CHEST_PARAMS } from './pieces/chestParams.ts';
 import { validateChestCombinations } from './pieces/chestValidate.ts';
+import type { ChestLayout } from './pieces/chestLayout.ts';
 import { CABINET_PARAMS } from './pieces/cabinetParams.ts';
 import { validateCabinetCombinations } from './pieces/cabinet.ts';
 import { DRESSER_PARAMS } from './pieces/dresserParams.ts';
@@ -25,8 +26,11 @@ export const PIECE_KINDS: readonly PieceKind[] = ['chest', 'dresser', 'cabinet']
 
 interface KindParams {
   defs: readonly ParamDef[];
-  /** Throws an InputError for a combination of values that cannot be built. */
-  combinations: (params: Readonly<Record<string, ParamValue>>, climate: Climate) => void;
+  /**
+   * Throws an InputError for a combination of values that cannot be built; may return what it
+   * worked out on the way (the chest's layout) so the builder need not work it out again.
+   */
+  combinations: (params: Readonly<Record<string, ParamValue>>, climate: Climate) => unknown;
 }
 
 const KINDS: Partial<Record<PieceKind, KindParams>> = {
@@ -128,6 +132,18 @@ function keysOf(defs: readonly ParamDef[]): ReadonlySet<string> {
  * climate valid. Throws an `InputError` naming the field and the limit at the first problem.
  */
 export function validateSpec(spec: unknown): PieceSpec {
+  return checkSpecForBuild(spec).spec;
+}
+
+/** A spec checked by `validateSpec`, with the chest's layout its checks worked out (mm). */
+export interface CheckedSpec {
+  spec: PieceSpec;
+  /** Set for a chest: the layout the combination checks read, which the builder reuses. */
+  chestLayout?: ChestLayout;
+}
+
+/** `validateSpec`, keeping what the checks worked out for `buildPiece`. */
+export function checkSpecForBuild(spec: unknown): CheckedSpec {
   if (typeof spec !== 'object' || spec === null || Array.isArray(spec)) {
     throw new InputError('spec', 'a piece spec must be an object with schemaVersion, kind and params', 'an object');
   }
@@ -153,7 +169,7 @@ export function validateSpec(spec: unknown): PieceSpec {
     params[def.key] = value === undefined ? def.default : checkValue(def, value);
   }
   const climate = s.climate === undefined ? climateOf(DEFAULT_CLIMATE) : checkClimate(readClimate(s.climate));
-  combinations(params, climate);
+  const worked = combinations(params, climate);
   const out: PieceSpec = { schemaVersion: 1, kind: s.kind as PieceKind, params, climate };
   if (s.room !== undefined) {
     // Checked here so a bad room is refused wherever a spec enters (API, file, editor), named
@@ -161,7 +177,7 @@ export function validateSpec(spec: unknown): PieceSpec {
     parseRoomSection(s.room, 'room');
     out.room = s.room;
   }
-  return out;
+  return out.kind === 'chest' ? { spec: out, chestLayout: worked as ChestLayout } : { spec: out };
 }
 
 function readClimate(value: unknown): { buildMcPercent: number; lowMcPercent: number; highMcPercent: number } {

@@ -30,7 +30,7 @@ import { battenSlotCheck, hingeRecessCheck } from '../checks/lid.ts';
 import { lidSupportCheck } from '../checks/lidSupport.ts';
 import { panelFloatCheck } from '../checks/panelFloat.ts';
 import { stockSizeChecks } from '../checks/stock.ts';
-import { chestLayout, type ChestParams } from './chestLayout.ts';
+import { chestLayout, type ChestLayout, type ChestParams } from './chestLayout.ts';
 
 /** A quarter inch: lumber thickness is sold in quarters (4/4, 5/4, 8/4 ...). */
 const QUARTER_MM = 25.4 / 4;
@@ -66,11 +66,14 @@ export function roughSizer(p: Pick<ChestParams, 'lengthAllowance' | 'widthAllowa
   };
 }
 
-/** Builds a chest from a spec already checked by `validateSpec`. */
-export function buildChest(spec: PieceSpec): ChestBuild {
+/**
+ * Builds a chest from a spec already checked by `validateSpec`; `layout`, when given, is the
+ * one those checks worked out for this spec (so it is not worked out twice).
+ */
+export function buildChest(spec: PieceSpec, layout?: ChestLayout): ChestBuild {
   const p = spec.params as unknown as ChestParams;
   const climate = spec.climate ?? DEFAULT_CLIMATE;
-  const lay = chestLayout(p, climate);
+  const lay = layout ?? chestLayout(p, climate);
   const { L, T } = lay;
   const species = getSpecies(p.species);
   const solid: Material = { kind: 'solid', speciesId: species.id, speciesName: species.name };

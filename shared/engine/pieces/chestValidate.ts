@@ -7,7 +7,7 @@
 import { InputError } from '../../errors.ts';
 import { DEFAULT_CLIMATE, type Climate } from '../../wood/climate.ts';
 import type { ParamValue } from '../types.ts';
-import { chestLayout, type ChestParams } from './chestLayout.ts';
+import { chestLayout, type ChestLayout, type ChestParams } from './chestLayout.ts';
 
 /** Narrowest panel opening the engine builds: 1 in. Casewright's limit. */
 export const MIN_PANEL_OPENING_MM = 25.4;
@@ -25,8 +25,11 @@ function fail(field: string, message: string, limit: string): never {
   throw new InputError(field, `${message}; must be ${limit}`, limit);
 }
 
-/** Throws an InputError for the first combination of `params` a chest cannot be built with. */
-export function validateChestCombinations(params: Readonly<Record<string, ParamValue>>, climate: Climate = DEFAULT_CLIMATE): void {
+/**
+ * Throws an InputError for the first combination of `params` a chest cannot be built with;
+ * returns the layout it checked, for the builder to reuse.
+ */
+export function validateChestCombinations(params: Readonly<Record<string, ParamValue>>, climate: Climate = DEFAULT_CLIMATE): ChestLayout {
   const p = params as unknown as ChestParams;
   const L = p.legSize;
   const T = p.stockThickness;
@@ -112,4 +115,5 @@ export function validateChestCombinations(params: Readonly<Record<string, ParamV
     if (p.fingerNotchWidth + 2 * MIN_TONGUE_MM > layout.spanXMm) fail('fingerNotchWidth', `a ${r(p.fingerNotchWidth)} mm finger notch is wider than the front rail between the legs`, atMost(layout.spanXMm - 2 * MIN_TONGUE_MM));
     if (p.fingerNotchDepth + p.frameGrooveDepth + MIN_TONGUE_MM > p.topRailWidth) fail('fingerNotchDepth', `a ${r(p.fingerNotchDepth)} mm finger notch reaches the panel groove of the ${r(p.topRailWidth)} mm top rail`, atMost(p.topRailWidth - p.frameGrooveDepth - MIN_TONGUE_MM));
   }
+  return layout;
 }
