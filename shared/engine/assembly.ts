@@ -3,7 +3,8 @@
  * identical instances (same size, material and cuts in their own frame) become one `Part` with a
  * quantity and one `Placement` each, and joints between instances become joints between parts.
  */
-import type { Box3, Feature, Grain, GlueUpPlan, Joint, JointType, Material, Part, PartRole, Placement, RoughSize, Vec3 } from './types.ts';
+import { assert } from '../assert.ts';
+import type { Box3, Feature, Grain, GlueUpPlan, GrainMatch, Joint, JointType, Material, Part, PartRole, Placement, RoughSize, Vec3 } from './types.ts';
 import { describeFeature, type FeatureDraft } from './geometry/featureDescribe.ts';
 import { oppositeAxis, placeInto, type AxisMap } from './geometry/placement.ts';
 
@@ -30,6 +31,8 @@ export interface PartDraft {
   features: readonly FeatureDraft[];
   notes: readonly string[];
   glueUp?: GlueUpPlan;
+  /** This instance's place in a run cut from one board; not part of its shape, so runs never split a part. */
+  grainMatch?: GrainMatch;
   name: PartNamer;
 }
 
@@ -141,6 +144,14 @@ interface PartClass {
   features: Feature[];
 }
 
+// Every instance of a part in a run, or none: a part half in runs has no sensible board order.
+function grainMatchOf(same: readonly PartDraft[]): { grainMatch?: readonly GrainMatch[] } {
+  const runs = same.flatMap((d) => (d.grainMatch ? [d.grainMatch] : []));
+  if (runs.length === 0) return {};
+  assert(runs.length === same.length, `part ${same[0]!.label}: every instance or none takes a grain-match run`);
+  return { grainMatch: runs };
+}
+
 /** Merges identical instances into parts and resolves joints to part ids. */
 export function assemble(drafts: readonly PartDraft[], joints: readonly JointDraft[], roughFor: RoughSizer): Assembled {
   // An instance keeps its own orientation unless, turned end for end about its thickness axis,
@@ -200,6 +211,7 @@ export function assemble(drafts: readonly PartDraft[], joints: readonly JointDra
       lengthMm: first.size[0], widthMm: first.size[1], thicknessMm: first.size[2],
       features, notes: first.notes,
       ...(first.glueUp ? { glueUp: first.glueUp } : {}),
+      ...grainMatchOf(same),
     };
     parts.push(Object.assign({}, body, { rough: roughFor(body), quantity: same.length }));
     same.forEach((draft, instance) => {

@@ -235,6 +235,19 @@ export interface GlueUpPlan {
   boardWidthMm: number;
 }
 
+/**
+ * One part instance's place in a run of parts cut one after another from one board, so their
+ * grain and colour run on from part to part (a column of drawer fronts, top to bottom).
+ */
+export interface GrainMatch {
+  /** Shared by every instance cut from the same board, e.g. `drawer-fronts-column-1`. */
+  group: string;
+  /** Position along the board from its end, 1 first; instances of one group follow in this order. */
+  order: number;
+  /** What the group is, in the maker's words, e.g. `drawer fronts, column 1`. */
+  note?: string;
+}
+
 /** One distinct part; identical parts share one `Part` with a quantity and several placements. */
 export interface Part {
   /** Stable, readable id, e.g. `leg`, `front-top-rail`, `side-panel`. */
@@ -253,6 +266,12 @@ export interface Part {
   features: readonly Feature[];
   /** Present when the part is glued up from several boards. */
   glueUp?: GlueUpPlan;
+  /**
+   * Present when instances must be cut in sequence from one board: one entry per instance, in
+   * instance order (the `instance` of its placement). Identical parts from different runs share
+   * one `Part`, so the run is an instance's, not the part's.
+   */
+  grainMatch?: readonly GrainMatch[];
   /** Notes a maker needs on the cut list, e.g. `float: do not glue`. */
   notes: readonly string[];
 }

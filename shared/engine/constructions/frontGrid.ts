@@ -6,6 +6,7 @@
  * covering the carcass edges with an even gap between fronts.
  */
 import { assert } from '../../assert.ts';
+import type { GrainMatch } from '../types.ts';
 
 /** How fronts sit: inside the openings or over the frame. */
 export type FrontMount = 'inset' | 'overlay';
@@ -117,4 +118,17 @@ export function frontGrid(o: FrontGridOptions): FrontGrid {
   }));
   const columnBoundariesX = columns.slice(1).map((col, c) => (columns[c]![1] + col[0]) / 2);
   return { rows, columns, cells, columnBoundariesX };
+}
+
+/**
+ * The grain-match run of a solid drawer front: each column of the bank is cut top to bottom from
+ * one board, so the figure runs on from drawer to drawer (common practice, no published source).
+ * `columns` is the bank's column count, for the run's name.
+ */
+export function frontGrainMatch(front: Pick<FrontBox, 'row' | 'col'>, columns: number): GrainMatch {
+  return {
+    group: `drawer-fronts-column-${front.col + 1}`,
+    order: front.row + 1,
+    note: columns > 1 ? `drawer fronts, column ${front.col + 1}` : 'drawer fronts',
+  };
 }

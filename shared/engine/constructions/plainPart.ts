@@ -2,7 +2,7 @@
 import type { PartDraft, PartNamer } from '../assembly.ts';
 import type { FeatureDraft } from '../geometry/featureDescribe.ts';
 import type { AxisMap } from '../geometry/placement.ts';
-import type { Box3, GlueUpPlan, Grain, Material, PartRole, Vec3 } from '../types.ts';
+import type { Box3, GlueUpPlan, Grain, GrainMatch, Material, PartRole, Vec3 } from '../types.ts';
 
 /** Options for {@link plainPart}: everything of a {@link PartDraft} but its size. */
 export interface PlainPartOptions {
@@ -18,6 +18,7 @@ export interface PlainPartOptions {
   features?: readonly FeatureDraft[];
   notes?: readonly string[];
   glueUp?: GlueUpPlan;
+  grainMatch?: GrainMatch;
   name: PartNamer;
 }
 
@@ -35,6 +36,7 @@ export function plainPart(o: PlainPartOptions): PartDraft {
     axes: o.axes, world: o.world, explodeMm: o.explodeMm,
     features: o.features ?? [], notes: o.notes ?? [], name: o.name,
     ...(o.glueUp ? { glueUp: o.glueUp } : {}),
+    ...(o.grainMatch ? { grainMatch: o.grainMatch } : {}),
   };
 }
 

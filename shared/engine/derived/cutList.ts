@@ -12,6 +12,16 @@ export function materialLabel(part: Part): string {
   return part.material.kind === 'solid' ? `${part.material.speciesName} ${part.rough.quarters}/4` : part.material.sheetName;
 }
 
+/**
+ * The cut-list note of a part cut in runs from one board, e.g. `grain-matched: drawer fronts,
+ * column 1 and column 2; cut each in order, top first, from one board`.
+ */
+export function grainMatchNotes(part: Part): string[] {
+  if (!part.grainMatch || part.grainMatch.length === 0) return [];
+  const names = [...new Set(part.grainMatch.map((m) => m.note ?? m.group))];
+  return [`grain-matched (${names.join('; ')}): cut each run in order from one board, first part at the board's end`];
+}
+
 /** Groups parts by material (solid wood by species and stock thickness first, then sheets). */
 export function cutList(parts: readonly Part[]): CutListGroup[] {
   const groups = new Map<string, { kind: 'solid' | 'sheet'; quarters: number; rows: CutListRow[] }>();
@@ -24,7 +34,7 @@ export function cutList(parts: readonly Part[]): CutListGroup[] {
       finished: [part.lengthMm, part.widthMm, part.thicknessMm],
       rough: [part.rough.lengthMm, part.rough.widthMm, part.rough.thicknessMm],
       grain: part.grain,
-      notes: part.glueUp ? [...part.notes, `rough width allows for jointing ${part.glueUp.boards} boards`] : part.notes,
+      notes: [...part.notes, ...(part.glueUp ? [`rough width allows for jointing ${part.glueUp.boards} boards`] : []), ...grainMatchNotes(part)],
     });
     groups.set(label, group);
   }
