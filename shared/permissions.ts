@@ -5,7 +5,8 @@
  *
  * - owner: runs the workshop (members, invitations, settings, price list, deleting it) and can
  *   do everything a designer can;
- * - designer: creates, saves, forks, archives and publishes designs inside the workshop;
+ * - designer: creates, saves, forks, archives and publishes designs inside the workshop, and
+ *   keeps its stock (the sheets, offcuts and boards on hand) up to date, as the people who cut do;
  * - reviewer: a client or colleague who looks, comments and approves a revision, never edits.
  */
 
@@ -22,6 +23,7 @@ export const ACTIONS = [
   'members.manage',
   'invitations.manage',
   'priceList.manage',
+  'stock.manage',
   'design.read',
   'design.create',
   'design.edit',
@@ -36,7 +38,7 @@ export type Action = (typeof ACTIONS)[number];
 
 const DESIGNER: readonly Action[] = [
   'workshop.read', 'members.read', 'design.read', 'design.create', 'design.edit', 'design.fork',
-  'design.archive', 'design.publish', 'comment.read', 'comment.create',
+  'design.archive', 'design.publish', 'comment.read', 'comment.create', 'stock.manage',
 ];
 
 /** Role → the actions it allows. Anything not listed is refused. */

@@ -1,7 +1,7 @@
 /**
  * The demo: Tidewater Joinery, an invented small shop on the coast, with three invented people
  * (server/db/demo-accounts.json, the sign-ins `npm start` prints) and a few designs with
- * revisions, a fork, comments, an approval and a price list. Nothing here is a real business,
+ * revisions, a fork, comments, an approval, a price list and stock on hand. Nothing here is a real business,
  * person or price.
  *
  * Idempotent: people, the workshop, memberships and each design are created only when missing,
@@ -20,6 +20,7 @@ import { createCommentService } from '../features/comments/comments.service.ts';
 import { createDesignService } from '../features/designs/designs.service.ts';
 import { seedDemoPriceList } from './demoPriceList.ts';
 import { seedDemoRoom } from './demoRoom.ts';
+import { seedDemoStock } from './demoStock.ts';
 import { modelsFor } from './models/index.ts';
 
 export const DEMO_WORKSHOP = 'Tidewater Joinery';
@@ -77,6 +78,8 @@ export async function seedDemo(sequelize: Sequelize): Promise<boolean> {
   }
   // Invented prices (see demoPriceList.ts), so the Materials page can cost the demo pieces.
   created = (await seedDemoPriceList(sequelize, workshopId, people.owner)) || created;
+  // Invented boards on the rack and an offcut (see demoStock.ts), used before anything is bought.
+  created = (await seedDemoStock(sequelize, workshopId, people.owner)) || created;
 
   const existing = async (title: string) => models.Design.findOne({ where: { workshopId, title } });
 

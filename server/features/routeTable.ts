@@ -10,6 +10,7 @@ import { designRoutes } from './designs/designs.routes.ts';
 import { invitationRoutes } from './invitations/invitations.routes.ts';
 import { mailRoutes } from './mail/mail.routes.ts';
 import { priceListRoutes } from './priceLists/priceLists.routes.ts';
+import { stockRoutes } from './stock/stock.routes.ts';
 import { workshopRoutes } from './workshops/workshops.routes.ts';
 
 export function apiRouteTable(deps: FeatureDeps): RouteDef[] {
@@ -20,6 +21,7 @@ export function apiRouteTable(deps: FeatureDeps): RouteDef[] {
     ...designRoutes(deps),
     ...commentRoutes(deps),
     ...priceListRoutes(deps),
+    ...stockRoutes(deps),
     // The mail catcher's inbox exists only outside production, when the app runs one.
     ...(deps.mailbox && !deps.config.isProduction ? mailRoutes(deps.mailbox) : []),
   ];

@@ -1,14 +1,19 @@
 /**
- * What a workshop cuts from, as plain data a form edits and a Web Worker receives: the sheet
- * size for sale, offcuts kept in stock, board lengths and widths for sale, boards in stock with
- * their defects, the saw's kerf, the edge trim, and how hard the optimiser tries. Turned into
- * the takeoff's options by {@link takeoffOptionsFor}, which checks every value first.
+ * What a workshop cuts from, as plain data a form edits, the server stores per workshop and a
+ * Web Worker receives: the sheet size for sale, offcuts kept in stock, board lengths and widths
+ * for sale, the boards on hand with their knots and checks, the saw's kerf and the edge trim.
+ * Turned into the takeoff's options by {@link takeoffOptionsFor}, which checks every value first
+ * (`stockSettingsSchema` in shared/schemas/stock.ts).
+ *
+ * Milling allowances are not here: they are a design's parameters (the engine's rough sizes),
+ * so every view of a design agrees on them.
  */
 import { InputError } from '../errors.ts';
 import type { BoardDefect, BoardStock } from '../layout/boardTypes.ts';
 import { DEFAULT_BOARD_SIZES } from '../layout/boardInput.ts';
 import { DEFAULT_KERF_MM, DEFAULT_TRIM_MM, STANDARD_SHEET } from '../layout/sheetInput.ts';
 import type { SheetStock } from '../layout/sheetTypes.ts';
+import { stockProblem } from '../schemas/stock.ts';
 import { MM_PER_INCH } from '../units/length.ts';
 import type { TakeoffOptions } from './takeoff.ts';
 
@@ -20,14 +25,31 @@ export interface OffcutStock {
   count: number;
 }
 
-/** Boards of one species and thickness already in the workshop, mm, with knots or checks to cut around. */
+/** What a marked defect is: a knot, a check (a split along the grain), or anything else to cut around. */
+export type DefectKind = 'knot' | 'check' | 'other';
+
+/** A defect marked on a board in stock: where it starts from the board's end and edge, and its size, mm. */
+export interface StockDefect {
+  kind: DefectKind;
+  /** From the board's end to the near side of the defect, along the length. */
+  fromEndMm: number;
+  /** From the board's edge to the near side of the defect, across the width. */
+  fromEdgeMm: number;
+  /** Its size along the length (with the grain) and across the width. */
+  lengthMm: number;
+  widthMm: number;
+}
+
+/** One board on hand, mm: its species and stock thickness, its size and its defects. */
 export interface BoardInStock {
+  /** The maker's own mark for the board (chalk on its end), shown on its diagram. */
+  label?: string;
   speciesId: string;
+  /** Stock thickness in quarters of an inch, 4 for 4/4. */
   quarters: number;
   lengthMm: number;
   widthMm: number;
-  count: number;
-  defects: BoardDefect[];
+  defects: StockDefect[];
 }
 
 /** How many attempts the optimisers make: quick, the usual, or thorough. */
@@ -49,13 +71,13 @@ export interface StockSettings {
   /** Board lengths and widths for sale: every length in every width. */
   boardLengthsMm: number[];
   boardWidthsMm: number[];
+  /** Boards on hand, used before any board is bought. */
   boardsInStock: BoardInStock[];
   kerfMm: number;
   trimMm: number;
-  effort: LayoutEffort;
 }
 
-/** The defaults: 48 × 96 in sheets, 6 and 8 ft boards 4, 6 and 8 in wide, 1/8 in kerf, 1/4 in trim. */
+/** The defaults: 48 × 96 in sheets, 6 and 8 ft boards 4, 6 and 8 in wide, 1/8 in kerf, 1/4 in trim, nothing on hand. */
 export const DEFAULT_STOCK_SETTINGS: StockSettings = {
   sheetLengthMm: STANDARD_SHEET.lengthMm,
   sheetWidthMm: STANDARD_SHEET.widthMm,
@@ -65,17 +87,36 @@ export const DEFAULT_STOCK_SETTINGS: StockSettings = {
   boardsInStock: [],
   kerfMm: DEFAULT_KERF_MM,
   trimMm: DEFAULT_TRIM_MM,
-  effort: 'standard',
 };
+
+/** What the diagrams call each kind of defect. */
+export const DEFECT_NAMES: Readonly<Record<DefectKind, string>> = { knot: 'knot', check: 'check', other: 'defect' };
+
+/** The stock id the takeoff gives the board on hand at `index` of `boardsInStock`, so a page can tell which were used. */
+export const stockBoardId = (index: number) => `stock-${index + 1}`;
 
 const inches = (mm: number) => Number((mm / MM_PER_INCH).toFixed(3));
 
-/** The takeoff options for `settings`; throws an {@link InputError} naming the first bad field. */
-export function takeoffOptionsFor(settings: StockSettings): TakeoffOptions {
-  if (settings.boardLengthsMm.length === 0) throw new InputError('boardLengthsMm', 'needs at least one board length for sale', 'one or more lengths');
-  if (settings.boardWidthsMm.length === 0) throw new InputError('boardWidthsMm', 'needs at least one board width for sale', 'one or more widths');
-  const attempts = EFFORT_ATTEMPTS[settings.effort];
-  if (!attempts) throw new InputError('effort', `must be quick, standard or thorough (got ${String(settings.effort)})`, 'quick, standard or thorough');
+/** The region the board layout cuts around for a marked defect, mm from the board's end and edge. */
+export function boardDefectFor(defect: StockDefect): BoardDefect {
+  return {
+    startMm: defect.fromEndMm,
+    endMm: defect.fromEndMm + defect.lengthMm,
+    fromEdgeMm: defect.fromEdgeMm,
+    toEdgeMm: defect.fromEdgeMm + defect.widthMm,
+    note: DEFECT_NAMES[defect.kind],
+  };
+}
+
+/**
+ * The takeoff options for `settings` at `effort`; throws an {@link InputError} naming the first
+ * bad field (e.g. `boardsInStock[2].defects[0].lengthMm`) and its limit.
+ */
+export function takeoffOptionsFor(settings: StockSettings, effort: LayoutEffort = 'standard'): TakeoffOptions {
+  const problem = stockProblem(settings);
+  if (problem) throw new InputError(problem.field, problem.message, problem.limit);
+  const attempts = EFFORT_ATTEMPTS[effort];
+  if (!attempts) throw new InputError('effort', `must be quick, standard or thorough (got ${String(effort)})`, 'quick, standard or thorough');
   const sale: SheetStock = {
     id: 'sheet-for-sale',
     name: `Sheet ${inches(Math.min(settings.sheetLengthMm, settings.sheetWidthMm))} × ${inches(Math.max(settings.sheetLengthMm, settings.sheetWidthMm))} in`,
@@ -95,6 +136,21 @@ export function takeoffOptionsFor(settings: StockSettings): TakeoffOptions {
       defects: [],
     })),
   );
+  const onHand: (BoardStock & { speciesId: string; quarters: number })[] = settings.boardsInStock.map((b, i) => {
+    const size = `${inches(b.lengthMm)} × ${inches(b.widthMm)} in`;
+    const label = b.label?.trim() ?? '';
+    return {
+      id: stockBoardId(i),
+      name: label === '' ? `Board in stock ${size}` : `Board in stock “${label}” ${size}`,
+      lengthMm: b.lengthMm,
+      widthMm: b.widthMm,
+      count: 1,
+      inStock: true,
+      defects: b.defects.map(boardDefectFor),
+      speciesId: b.speciesId,
+      quarters: b.quarters,
+    };
+  });
   return {
     kerfMm: settings.kerfMm,
     trimMm: settings.trimMm,
@@ -107,9 +163,7 @@ export function takeoffOptionsFor(settings: StockSettings): TakeoffOptions {
       sale,
     ],
     boardStock: (speciesId, quarters) => [
-      ...settings.boardsInStock
-        .filter((b) => b.speciesId === speciesId && b.quarters === quarters)
-        .map((b, i) => ({ id: `stock-${i + 1}`, name: `Board in stock ${inches(b.lengthMm)} × ${inches(b.widthMm)} in`, lengthMm: b.lengthMm, widthMm: b.widthMm, count: b.count, inStock: true, defects: b.defects })),
+      ...onHand.filter((b) => b.speciesId === speciesId && b.quarters === quarters).map(({ speciesId: _s, quarters: _q, ...board }) => board),
       ...forSale,
     ],
   };

@@ -12,6 +12,8 @@ interface Props {
   maxMm: number;
   allowZero?: boolean;
   readOnly?: boolean;
+  /** Keep the label for screen readers only, as in a table whose header names the column. */
+  hideLabel?: boolean;
   className?: string;
 }
 
@@ -20,7 +22,7 @@ interface Props {
  * maker's unit), read by `parseLength`: a good value is applied when the field is left or Enter
  * is pressed, a bad one stays with its reason and is not applied.
  */
-export function LengthInput({ label, valueMm, onChange, maxMm, allowZero = false, readOnly = false, className = '' }: Props) {
+export function LengthInput({ label, valueMm, onChange, maxMm, allowZero = false, readOnly = false, hideLabel = false, className = '' }: Props) {
   const id = useId();
   const units = useDisplayUnits();
   const [draft, setDraft] = useState<string | null>(null);
@@ -39,7 +41,7 @@ export function LengthInput({ label, valueMm, onChange, maxMm, allowZero = false
   };
   return (
     <div className={className}>
-      <label htmlFor={id} className="block text-xs text-graphite-soft">{label}</label>
+      <label htmlFor={id} className={hideLabel ? 'sr-only' : 'block text-xs text-graphite-soft'}>{label}</label>
       <input id={id} className={`field ${error ? 'border-pencil bg-pencil-soft/40' : ''}`} value={draft ?? formatLength(valueMm, lengthFormat(units))} readOnly={readOnly}
         autoComplete="off" spellCheck={false} aria-invalid={error ? true : undefined} aria-describedby={error ? `${id}-error` : undefined}
         onChange={(e) => setDraft(e.target.value)} onBlur={commit} onKeyDown={(e) => e.key === 'Enter' && commit()} />

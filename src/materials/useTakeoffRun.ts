@@ -1,6 +1,6 @@
 import { useCallback, useEffect, useRef, useState } from 'react';
 import type { PieceResult } from '../../shared/engine/types.ts';
-import type { StockSettings } from '../../shared/materials/stockSettings.ts';
+import type { LayoutEffort, StockSettings } from '../../shared/materials/stockSettings.ts';
 import type { MaterialsTakeoff, TakeoffProgress } from '../../shared/materials/takeoff.ts';
 import type { FromLayoutWorker, ToLayoutWorker } from '../workers/layoutMessages.ts';
 
@@ -18,10 +18,10 @@ export function progressFraction(progress: TakeoffProgress | null): number {
 }
 
 /**
- * Lays out `result` on the stock in `settings` in a Web Worker whenever either changes; `cancel`
- * stops the run under way and keeps its best layouts, `rerun` starts again.
+ * Lays out `result` on the stock in `settings` at `effort` in a Web Worker whenever any of them
+ * changes; `cancel` stops the run under way and keeps its best layouts, `rerun` starts again.
  */
-export function useTakeoffRun(result: PieceResult | null, settings: StockSettings) {
+export function useTakeoffRun(result: PieceResult | null, settings: StockSettings, effort: LayoutEffort) {
   const worker = useRef<Worker | null>(null);
   const runId = useRef(0);
   const [run, setRun] = useState<TakeoffRun>({ status: 'idle' });
@@ -50,8 +50,8 @@ export function useTakeoffRun(result: PieceResult | null, settings: StockSetting
     if (!result || !worker.current) return;
     runId.current++;
     setRun({ status: 'running', progress: null, previous: lastTakeoff.current });
-    worker.current.postMessage({ type: 'run', id: runId.current, result, settings } satisfies ToLayoutWorker);
-  }, [result, settings]);
+    worker.current.postMessage({ type: 'run', id: runId.current, result, settings, effort } satisfies ToLayoutWorker);
+  }, [result, settings, effort]);
 
   useEffect(start, [start]);
 

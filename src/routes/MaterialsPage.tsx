@@ -2,13 +2,18 @@ import { useMemo, useState } from 'react';
 import { Link, useParams } from 'react-router-dom';
 import { costOf } from '../../shared/materials/cost.ts';
 import type { PriceList } from '../../shared/materials/priceList.ts';
+import { DEFAULT_STOCK_SETTINGS, stockBoardId, type LayoutEffort, type StockSettings } from '../../shared/materials/stockSettings.ts';
 import { shoppingList } from '../../shared/materials/shoppingList.ts';
 import type { MaterialsTakeoff } from '../../shared/materials/takeoff.ts';
 import { can } from '../../shared/permissions.ts';
+import { stockProblems, type StockResponse } from '../../shared/schemas/stock.ts';
+import { SPECIES, isSpeciesId } from '../../shared/wood/species.ts';
 import { SHEET_GOODS, isSheetGoodId } from '../../shared/wood/sheetGoods.ts';
 import { useDesign } from '../api/useDesign.ts';
 import { useMe } from '../api/useMe.ts';
 import { usePriceList } from '../api/usePriceList.ts';
+import { useSaveStock } from '../api/useSaveStock.ts';
+import { useStock } from '../api/useStock.ts';
 import { BoardDiagramView } from '../components/BoardDiagramView.tsx';
 import { CostSummary } from '../components/CostSummary.tsx';
 import { ErrorNotice } from '../components/ErrorNotice.tsx';
@@ -18,14 +23,15 @@ import { LoadingBlock } from '../components/LoadingBlock.tsx';
 import { PriceListEditor } from '../components/PriceListEditor.tsx';
 import { SheetDiagramView } from '../components/SheetDiagramView.tsx';
 import { ShoppingListTable } from '../components/ShoppingListTable.tsx';
+import { StockBoardsTable } from '../components/StockBoardsTable.tsx';
 import { StockOptionsForm } from '../components/StockOptionsForm.tsx';
+import { StockSaveBar } from '../components/StockSaveBar.tsx';
 import { TakeoffNumbers } from '../components/TakeoffNumbers.tsx';
 import { buildOutcome } from '../editor/pieceBuild.ts';
 import { exportFileStem } from '../export/download.ts';
 import { extrasOf, suggestedQuantities, unitItems } from '../materials/extras.ts';
 import { useTakeoffRun } from '../materials/useTakeoffRun.ts';
 import { useEditorStore } from '../state/useEditorStore.ts';
-import { useStockSettings } from '../state/useStockSettings.ts';
 import { linkTo } from './paths.ts';
 
 const EMPTY_PRICES: PriceList = { currency: 'USD', items: [] };
@@ -44,6 +50,7 @@ export function MaterialsPage() {
   const editorSaved = useEditorStore((s) => s.savedSpec);
   const workshopId = design.data?.workshopId;
   const prices = usePriceList(workshopId);
+  const stock = useStock(workshopId);
 
   if (design.isPending) return <LoadingBlock label="Opening the design…" className="mx-auto max-w-7xl" />;
   if (design.isError) return <ErrorNotice title="Could not open this design" error={design.error} onRetry={() => void design.refetch()} className="mx-auto mt-8 max-w-xl" />;
@@ -68,7 +75,8 @@ export function MaterialsPage() {
       </header>
       {outcome.ok ? (
         <MaterialsBody result={outcome.result} workshopId={design.data.workshopId} priceList={prices.data?.priceList ?? EMPTY_PRICES}
-          priceData={prices.data ?? null} pricesError={prices.error} canEditPrices={can(role, 'priceList.manage')} fileStem={exportFileStem(design.data.title, design.data.head.number)} />
+          priceData={prices.data ?? null} pricesError={prices.error} canEditPrices={can(role, 'priceList.manage')} fileStem={exportFileStem(design.data.title, design.data.head.number)}
+          stockData={stock.data ?? null} stockError={stock.error} canEditStock={can(role, 'stock.manage')} />
       ) : (
         <ErrorNotice title="This design does not build, so there is nothing to lay out" error={new Error(outcome.message)} />
       )}
@@ -78,12 +86,48 @@ export function MaterialsPage() {
 
 type Built = Extract<ReturnType<typeof buildOutcome>, { ok: true }>['result'];
 
-function MaterialsBody({ result, workshopId, priceList, priceData, pricesError, canEditPrices, fileStem }: {
+const EFFORTS: { value: LayoutEffort; label: string }[] = [
+  { value: 'quick', label: 'Quick' },
+  { value: 'standard', label: 'Standard' },
+  { value: 'thorough', label: 'Thorough (slower)' },
+];
+
+/** What the last layout did with each board on hand, by its row in the stock. */
+function boardUsage(takeoff: MaterialsTakeoff, boards: StockSettings['boardsInStock']): Map<number, string> {
+  const usage = new Map<number, string>();
+  boards.forEach((board, i) => {
+    const group = takeoff.boards.find((g) => g.speciesId === board.speciesId && g.quarters === board.quarters);
+    const wood = `${isSpeciesId(board.speciesId) ? SPECIES[board.speciesId].name : board.speciesId} ${board.quarters}/4`;
+    if (!group) return usage.set(i, `no ${wood} parts in this design`);
+    const at = group.layout.boards.findIndex((plan) => plan.stockId === stockBoardId(i));
+    usage.set(i, at >= 0 ? `board ${at + 1} of ${wood}` : 'not needed');
+  });
+  return usage;
+}
+
+function MaterialsBody({ result, workshopId, priceList, priceData, pricesError, canEditPrices, fileStem, stockData, stockError, canEditStock }: {
   result: Built; workshopId: string; priceList: PriceList; priceData: ReturnType<typeof usePriceList>['data'] | null; pricesError: unknown; canEditPrices: boolean; fileStem: string;
+  stockData: StockResponse | null; stockError: unknown; canEditStock: boolean;
 }) {
-  const settings = useStockSettings((s) => s.settings);
-  const setSettings = useStockSettings((s) => s.setSettings);
-  const { run, cancel, rerun } = useTakeoffRun(result, settings);
+  // The form edits a draft of the workshop's stock; the layouts follow the draft, Save keeps it.
+  const [draft, setDraft] = useState<StockSettings | null>(null);
+  const [effort, setEffort] = useState<LayoutEffort>('standard');
+  const saveStock = useSaveStock(workshopId);
+  const settings = draft ?? stockData?.stock ?? DEFAULT_STOCK_SETTINGS;
+  const problems = useMemo(() => stockProblems(settings), [settings]);
+  const stockReady = stockData !== null || stockError != null;
+  // A stock with a problem is not laid out: the last layouts stay until it is fixed.
+  const { run, cancel, rerun } = useTakeoffRun(stockReady && problems.length === 0 ? result : null, settings, effort);
+  const edit = (next: StockSettings) => {
+    saveStock.reset();
+    setDraft(next);
+  };
+  const saveBar = (
+    <StockSaveBar dirty={draft !== null} problemCount={problems.length} saving={saveStock.isPending} canEdit={canEditStock}
+      updatedAt={stockData?.updatedAt ?? null} updatedBy={stockData?.updatedBy ?? null} saveError={saveStock.error}
+      onSave={() => draft && saveStock.mutate(draft, { onSuccess: () => setDraft(null) })} onDiscard={() => { saveStock.reset(); setDraft(null); }} />
+  );
+  const solidWoods = result.parts.flatMap((p) => (p.material.kind === 'solid' ? [{ speciesId: p.material.speciesId, quarters: p.rough.quarters }] : []));
   const [quantities, setQuantities] = useState<Record<string, number> | null>(null);
   const suggested = useMemo(() => suggestedQuantities(result, priceList), [result, priceList]);
   const shownQuantities = useMemo(() => ({ ...suggested, ...(quantities ?? {}) }), [suggested, quantities]);
@@ -93,13 +137,34 @@ function MaterialsBody({ result, workshopId, priceList, priceData, pricesError, 
   const cost = useMemo(() => (takeoff ? costOf(takeoff, priceList, extrasOf(priceList, shownQuantities)) : null), [takeoff, priceList, shownQuantities]);
   const list = useMemo(() => (takeoff && cost ? shoppingList(takeoff, cost) : null), [takeoff, cost]);
   const longestBoard = takeoff ? Math.max(1, ...takeoff.boards.flatMap((b) => b.layout.boards.map((p) => p.lengthMm))) : 1;
+  const usage = useMemo(() => (run.status === 'done' && problems.length === 0 ? boardUsage(run.takeoff, settings.boardsInStock) : new Map<number, string>()), [run, problems, settings]);
+  const topProblems = problems.filter((p) => p.path[0] !== 'boardsInStock');
 
   return (
     <div className="grid gap-4 lg:grid-cols-[20rem_minmax(0,1fr)]">
       <aside className="no-print grid content-start gap-4" aria-label="Stock and hardware">
+        <div className="card grid gap-2 p-3">
+          <h2 className="text-sm font-semibold">Workshop stock</h2>
+          {stockError != null && <ErrorNotice title="Could not read the workshop's stock; the layouts use the usual sizes" error={stockError} />}
+          {saveBar}
+          {topProblems.length > 0 && (
+            <ul role="alert" className="list-disc pl-4 text-xs text-pencil">
+              {topProblems.map((p) => <li key={p.field}>{p.field}: {p.message}</li>)}
+            </ul>
+          )}
+          <StockOptionsForm settings={settings} onChange={edit} sheetIds={sheetIds} readOnly={!canEditStock} />
+          <p className="text-[11px] text-graphite-faint">
+            <a href="#boards-on-hand" className="text-graphite underline decoration-rule hover:text-pencil">Boards on hand ({settings.boardsInStock.length})</a> are listed below the shopping list. Milling allowances belong to the design (its rough sizes).
+          </p>
+        </div>
         <div className="card p-3">
-          <h2 className="mb-2 text-sm font-semibold">Stock</h2>
-          <StockOptionsForm settings={settings} onChange={setSettings} sheetIds={sheetIds} />
+          <label className="text-xs text-graphite-soft">
+            Layout effort
+            <select className="field font-sans" value={effort} onChange={(e) => setEffort(e.target.value as LayoutEffort)}>
+              {EFFORTS.map((e) => <option key={e.value} value={e.value}>{e.label}</option>)}
+            </select>
+          </label>
+          <p className="mt-1 text-[11px] text-graphite-faint">How long this page searches for fewer sheets and boards; not saved.</p>
         </div>
         <div className="card p-3">
           <h2 className="mb-2 text-sm font-semibold">Hardware and finish</h2>
@@ -159,6 +224,20 @@ function MaterialsBody({ result, workshopId, priceList, priceData, pricesError, 
             {list && <div className="mt-6"><ShoppingListTable list={list} fileStem={fileStem} /></div>}
           </div>
         )}
+        <section id="boards-on-hand" aria-labelledby="boards-on-hand-heading" className="no-print mt-2 grid gap-2 border-t border-rule pt-4">
+          <div className="flex flex-wrap items-start gap-x-6 gap-y-2">
+            <div className="mr-auto max-w-xl">
+              <h2 id="boards-on-hand-heading" className="text-base font-semibold">Boards on hand</h2>
+              <p className="text-xs text-graphite-soft">
+                Boards already in the workshop are cut before any is bought, around their knots, checks and other defects. Mark each defect from the board's end and
+                edge to its near side, and its size with the grain and across. A board is used for parts of its own species and thickness.
+              </p>
+            </div>
+            <div className="w-80">{saveBar}</div>
+          </div>
+          <StockBoardsTable boards={settings.boardsInStock} onChange={(boardsInStock) => edit({ ...settings, boardsInStock })} readOnly={!canEditStock}
+            newBoard={solidWoods[0] ?? { speciesId: 'white-oak', quarters: 4 }} usage={usage} problems={problems} />
+        </section>
         {priceData && <div className="mt-2 border-t border-rule pt-4"><PriceListEditor workshopId={workshopId} data={priceData} canEdit={canEditPrices} /></div>}
       </div>
     </div>

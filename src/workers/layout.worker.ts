@@ -47,7 +47,7 @@ self.onmessage = (event: MessageEvent<ToLayoutWorker>) => {
   }
   let steps: TakeoffSteps;
   try {
-    steps = materialsTakeoffSteps(message.result, takeoffOptionsFor(message.settings));
+    steps = materialsTakeoffSteps(message.result, takeoffOptionsFor(message.settings, message.effort));
   } catch (error) {
     post({ type: 'error', id: message.id, field: isInputError(error) ? error.field : null, message: error instanceof Error ? error.message : String(error) });
     return;

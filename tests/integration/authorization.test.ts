@@ -6,6 +6,7 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Router } from 'express';
+import { DEFAULT_STOCK_SETTINGS } from '../../shared/materials/stockSettings.ts';
 import { can, type Role } from '../../shared/permissions.ts';
 import type { RouteDef } from '../../server/auth/access.ts';
 import { hashToken, newToken } from '../../server/auth/tokens.ts';
@@ -114,6 +115,14 @@ const CASES: Record<string, Case> = {
     request: (w) => ({ path: `/workshops/${w.workshopId}/price-list`, body: { currency: 'USD', items: [{ kind: 'sheet', sheetId: 'hardwood-plywood-3/4', pricePerSheetCents: 9000 }] } }),
   },
   'post /workshops/:workshopId/price-list/csv': { success: 200, request: (w) => ({ path: `/workshops/${w.workshopId}/price-list/csv`, body: 'kind,item,price\nsheet,hardwood-plywood-3/4,90.00\n' }) },
+  'get /workshops/:workshopId/stock': { success: 200, request: (w) => ({ path: `/workshops/${w.workshopId}/stock` }) },
+  'put /workshops/:workshopId/stock': {
+    success: 200,
+    request: (w) => ({
+      path: `/workshops/${w.workshopId}/stock`,
+      body: { ...DEFAULT_STOCK_SETTINGS, boardsInStock: [{ speciesId: 'white-oak', quarters: 4, lengthMm: 1829, widthMm: 178, defects: [{ kind: 'knot', fromEndMm: 900, fromEdgeMm: 60, lengthMm: 30, widthMm: 30 }] }] },
+    }),
+  },
   'get /dev/mail': { success: 200, request: () => ({ path: '/dev/mail' }) },
 };
 

@@ -21,6 +21,11 @@ describe('can', () => {
     }
   });
 
+  it('lets owners and designers keep the workshop stock, and reviewers only read it', () => {
+    expect(ROLES.filter((role) => can(role, 'stock.manage'))).toEqual(['owner', 'designer']);
+    expect(can('reviewer', 'workshop.read')).toBe(true);
+  });
+
   it('gives approval to reviewers only', () => {
     expect(ROLES.filter((role) => can(role, 'approval.decide'))).toEqual(['reviewer']);
   });

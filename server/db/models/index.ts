@@ -14,6 +14,7 @@ import { definePriceList } from './PriceList.ts';
 import { defineRevision } from './Revision.ts';
 import { defineUser } from './User.ts';
 import { defineWorkshop } from './Workshop.ts';
+import { defineWorkshopStock } from './WorkshopStock.ts';
 
 function defineModels(sequelize: Sequelize) {
   return {
@@ -27,6 +28,7 @@ function defineModels(sequelize: Sequelize) {
     Comment: defineComment(sequelize),
     Approval: defineApproval(sequelize),
     PriceList: definePriceList(sequelize),
+    WorkshopStock: defineWorkshopStock(sequelize),
   };
 }
 
