@@ -1,9 +1,8 @@
 /** Whether a form shows a parameter, from its `shownWhen` conditions and the other values. */
 import type { ParamCondition, ParamDef } from './paramDef.ts';
-import type { ParamValue } from './types.ts';
 
 /** True when `condition` holds for `params` (a missing value holds no condition). */
-export function conditionHolds(condition: ParamCondition, params: Readonly<Record<string, ParamValue | undefined>>): boolean {
+export function conditionHolds(condition: ParamCondition, params: Readonly<Record<string, unknown>>): boolean {
   const value = params[condition.param];
   if (value === undefined) return false;
   if ('is' in condition) return condition.is.includes(value as string | number | boolean);
@@ -14,6 +13,6 @@ export function conditionHolds(condition: ParamCondition, params: Readonly<Recor
  * True when a form should show `def` for the values `params` (defaults merged in by the
  * caller): every one of its `shownWhen` conditions holds, or it has none.
  */
-export function paramShown(def: ParamDef, params: Readonly<Record<string, ParamValue | undefined>>): boolean {
+export function paramShown(def: ParamDef, params: Readonly<Record<string, unknown>>): boolean {
   return (def.shownWhen ?? []).every((condition) => conditionHolds(condition, params));
 }
