@@ -34,11 +34,21 @@ export interface ResultComparison {
 
 const SIZE_TOLERANCE_MM = 1e-6;
 
+/**
+ * True when two stored parameter values differ by more than arithmetic noise: numbers within
+ * `SIZE_TOLERANCE_MM` of each other (a length typed in inches and read back, say) are the same.
+ * How much a maker can see is the client's to judge, at the precision it shows.
+ */
+export function paramValuesDiffer(from: unknown, to: unknown): boolean {
+  if (typeof from === 'number' && typeof to === 'number') return Math.abs(from - to) > SIZE_TOLERANCE_MM;
+  return JSON.stringify(from) !== JSON.stringify(to);
+}
+
 /** Parameters changed, parts added and removed (by id), and parts whose finished size changed. */
 export function compareResults(a: PieceResult, b: PieceResult): ResultComparison {
   const keys = [...new Set([...Object.keys(a.spec.params), ...Object.keys(b.spec.params)])];
   const paramsChanged = keys
-    .filter((k) => JSON.stringify(a.spec.params[k]) !== JSON.stringify(b.spec.params[k]))
+    .filter((k) => paramValuesDiffer(a.spec.params[k], b.spec.params[k]))
     .map((key) => ({ key, from: a.spec.params[key], to: b.spec.params[key] }));
   for (const key of ['buildMcPercent', 'lowMcPercent', 'highMcPercent'] as const) {
     const from = a.spec.climate?.[key];

@@ -1,4 +1,5 @@
 import { Link, useParams, useSearchParams } from 'react-router-dom';
+import type { ParamDef } from '../../shared/engine/paramDef.ts';
 import { paramDefs } from '../../shared/engine/params.ts';
 import type { ParamValue } from '../../shared/engine/types.ts';
 import type { RevisionInfo } from '../../shared/schemas/designs.ts';
@@ -17,6 +18,13 @@ import { useDisplayUnits } from '../state/usePreferences.ts';
 import { linkTo } from './paths.ts';
 
 const CHANGE_WORDS: Record<PartChange, string> = { added: 'added', removed: 'removed', resized: 'resized', recounted: 'quantity', same: '' };
+
+/** A difference below the shown precision, in mm for lengths (the finest unit a maker reads). */
+function hiddenText(def: ParamDef, difference: number): string {
+  const figure = Number(difference.toPrecision(2));
+  if (def.kind === 'length') return `${figure} mm`;
+  return def.unit ? `${figure} ${def.unit}` : String(figure);
+}
 
 function revisionNumber(text: string | null): number | null {
   const n = Number(text);
@@ -42,17 +50,18 @@ export function ComparePage() {
   if (error || !design.data || !compare.data || !a.data || !b.data) return <ErrorNotice title="Could not compare these revisions" error={error} className="mx-auto mt-8 max-w-xl" />;
 
   const defs = paramDefs(a.data.spec.kind);
-  const serverChanged = new Set(compare.data.params.map((p) => p.key));
-  const rows = paramCompareRows(defs, a.data.spec, b.data.spec).map((r) => ({ ...r, changed: r.changed || serverChanged.has(r.def.key) }));
-  const changedCount = rows.filter((r) => r.changed).length;
-  const builtA = buildOutcome(a.data.spec);
-  const builtB = buildOutcome(b.data.spec);
-  const parts = builtA.ok && builtB.ok ? partCompareRows(builtA.result, builtB.result) : null;
-  const show = (def: (typeof rows)[number]['def'], v: ParamValue) => {
+  const show = (def: ParamDef, v: ParamValue) => {
     if (def.kind === 'boolean') return v ? 'yes' : 'no';
     const choice = choicesFor(def).find((c) => c.value === v);
     return choice ? choice.label : formatFieldValue(def, v, units);
   };
+  // Rows are marked by what the maker reads, not by the server's exact comparison: a change
+  // smaller than the shown precision is noted faintly instead.
+  const rows = paramCompareRows(defs, a.data.spec, b.data.spec, show);
+  const changedCount = rows.filter((r) => r.changed).length;
+  const builtA = buildOutcome(a.data.spec);
+  const builtB = buildOutcome(b.data.spec);
+  const parts = builtA.ok && builtB.ok ? partCompareRows(builtA.result, builtB.result, length) : null;
 
   return (
     <div className="mx-auto w-full max-w-[1400px] px-4 py-6">
@@ -80,8 +89,15 @@ export function ComparePage() {
                   {r.changed && <span className="mr-1 text-pencil" aria-label="changed">●</span>}
                   <span className="text-graphite-faint">{r.def.group} · </span>{r.def.label}
                 </th>
-                <td className="dim px-3 py-1 text-right">{show(r.def, r.from)}</td>
-                <td className="dim px-3 py-1 text-right">{show(r.def, r.to)}</td>
+                <td className="dim px-3 py-1 text-right">{r.fromText}</td>
+                <td className="dim px-3 py-1 text-right">
+                  {r.toText}
+                  {r.hiddenDifference !== null && (
+                    <span className="ml-1.5 text-[11px] text-graphite-faint" title="The two values differ by less than the precision shown">
+                      ({hiddenText(r.def, r.hiddenDifference)} apart)
+                    </span>
+                  )}
+                </td>
               </tr>
             ))}
           </tbody>

@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { paramValuesDiffer } from '../../../shared/engine/compare.ts';
 import { buildPiece, compareResults, defaultSpec, summarizeResult } from '../../../shared/engine/index.ts';
 
 const MM_TOLERANCE = 1e-6;
@@ -32,5 +33,22 @@ describe('compareResults', () => {
     const diff = compareResults(a, b);
     expect(diff.partsRemoved).toContain('front-back-stile');
     expect(diff.partsAdded).toContain('side-stile');
+  });
+
+  it('does not list a length that differs only by arithmetic noise', () => {
+    const a = buildPiece(spec);
+    // 40 in typed as 1016 mm and read back through inches can land a hair off.
+    const b = buildPiece({ ...spec, params: { ...spec.params, width: (spec.params.width as number) + 1e-9 } });
+    expect(compareResults(a, b).paramsChanged).toEqual([]);
+  });
+});
+
+describe('paramValuesDiffer', () => {
+  it('tells numbers apart only beyond a millionth of a millimetre, and other values exactly', () => {
+    expect(paramValuesDiffer(1016, 1016 + 1e-9)).toBe(false);
+    expect(paramValuesDiffer(1016, 1016.01)).toBe(true);
+    expect(paramValuesDiffer('plywood', 'solid')).toBe(true);
+    expect(paramValuesDiffer(true, true)).toBe(false);
+    expect(paramValuesDiffer(undefined, 3)).toBe(true);
   });
 });
