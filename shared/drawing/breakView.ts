@@ -3,7 +3,7 @@
  * edge views, so a rail or leg can be drawn large enough to read its joinery. Dimensions that
  * span the break keep their true length; break lines mark where the part is cut short.
  */
-import type { DimensionRequest, ModelView, Primitive, Pt } from './types.ts';
+import type { DimensionRequest, ModelView, Primitive, Pt, ViewNote } from './types.ts';
 
 /** A break along the view's horizontal axis: model x from `from` to `to` is left out. */
 export interface ViewBreak {
@@ -69,6 +69,13 @@ function breakPrimitive(p: Primitive, b: ViewBreak): Primitive[] {
   }
 }
 
+/** A note's target moved as the part is shortened; none when its feature falls in the break. */
+function breakNote(n: ViewNote, b: ViewBreak): ViewNote[] {
+  if (inside(n.target.x, b) || inside(n.target.x + n.target.w, b)) return [];
+  const x = mapX(n.target.x, b);
+  return [{ ...n, target: { ...n.target, x, w: mapX(n.target.x + n.target.w, b) - x } }];
+}
+
 /** Break lines: a straight line with one zigzag at its middle, past the part at both ends. */
 function breakLine(x: number, y0: number, y1: number, amp: number): Primitive[] {
   const mid = (y0 + y1) / 2;
@@ -93,6 +100,7 @@ export function applyBreak(view: ModelView, b: ViewBreak): ModelView {
     primitives,
     dimensions,
     callouts: view.callouts.map((c) => ({ ...c, at: mapPt(c.at, b) })),
+    ...(view.notes ? { notes: view.notes.flatMap((n) => breakNote(n, b)) } : {}),
     bounds: { ...bounds, w: mapX(bounds.x + bounds.w, b) - bounds.x },
   };
 }

@@ -6,6 +6,7 @@
  * outermost; a text that does not fit between its extension lines goes beside the line, right
  * or above first, else left or below.
  */
+import { placeNotes } from './notePlacement.ts';
 import { inflate, rectsOverlap, rectUnion } from './rects.ts';
 import { capHeightMm, DIM_TEXT_PT, textWidthMm, VIEW_TITLE_PT } from './textMetrics.ts';
 import type { DimensionRequest, Label, ModelView, PlacedView, Primitive, Pt, Rect } from './types.ts';
@@ -124,6 +125,19 @@ export function layoutView(model: ModelView, scale: number, scaleLabel: string):
   const toPaper = (p: Pt): Pt => pt((p[0] - b.x) / scale, (b.y + b.h - p[1]) / scale);
   const geometry: Rect = { x: 0, y: 0, w: b.w / scale, h: b.h / scale };
   const primitives: Primitive[] = model.primitives.map((p) => mapPrimitive(p, toPaper, scale));
+  if (model.notes?.length) {
+    const corners = (r: Rect): Rect => {
+      const [x0, y1] = toPaper([r.x, r.y]);
+      const [x1, y0] = toPaper([r.x + r.w, r.y + r.h]);
+      return { x: x0, y: y0, w: x1 - x0, h: y1 - y0 };
+    };
+    const rectsOf = (keep: (p: Primitive) => boolean) => primitives.filter(keep).map(primitiveRect);
+    primitives.push(...placeNotes(
+      model.notes.map((n) => ({ text: n.text, target: corners(n.target) })),
+      { features: rectsOf((p) => p.type === 'circle' || p.type === 'polygon'), texts: rectsOf((p) => p.type === 'label'), lines: rectsOf((p) => p.type === 'segment') },
+      geometry,
+    ));
+  }
 
   const rows: Record<Side, Row[]> = { below: [], above: [], left: [], right: [] };
   const tierStart: Record<Side, number> = { below: 0, above: 0, left: 0, right: 0 };

@@ -11,7 +11,9 @@ import { featureKindText } from './featureText.ts';
 import type { DrawingUnits } from './lengthText.ts';
 import { chooseFaceUp, inPlane, NORMAL, onAxis, partSize, partViewAxes, viewShowing, type FaceUp, type PartViewId } from './partFrame.ts';
 import { partEdges, partGrid } from './partSolid.ts';
+import { inflate, rectsOverlap, rectUnion } from './rects.ts';
 import { usualScales } from './scale.ts';
+import { capHeightMm, textWidthMm } from './textMetrics.ts';
 import type { DimensionRequest, ModelView, Primitive, Pt, Rect, Segment } from './types.ts';
 
 /** A cut whose smallest size is under this on paper gets a detail, mm. */
@@ -175,11 +177,58 @@ export function jointDetails(part: Part, units: DrawingUnits, viewScales: Readon
   });
 }
 
+/** Size of a mark's number, pt. */
+const MARK_TEXT_PT = 8;
+/** Clear paper kept between two marks, mm. */
+const MARK_GAP_MM = 1;
+
+/** Where a mark's number sits: beyond the circle's upper right, on paper as in the model (y up). */
+function markLabelAt(mark: DetailMark): Pt {
+  return [mark.at[0] + mark.radius * 0.75, mark.at[1] + mark.radius * 0.75];
+}
+
+/**
+ * What a mark covers on its view when drawn at 1:`scale`, model mm (y up): its circle and its
+ * number, whose size is fixed on paper and so grows in model mm as the scale gets smaller.
+ */
+export function markExtent(mark: DetailMark, scale: number): Rect {
+  const [lx, ly] = markLabelAt(mark);
+  const circle: Rect = { x: mark.at[0] - mark.radius, y: mark.at[1] - mark.radius, w: 2 * mark.radius, h: 2 * mark.radius };
+  const label: Rect = { x: lx, y: ly, w: textWidthMm(mark.text, MARK_TEXT_PT) * scale, h: capHeightMm(MARK_TEXT_PT) * scale };
+  return rectUnion([circle, label]);
+}
+
+/** One circle round the circles of `group`, numbered with all their numbers. */
+function mergedMark(group: readonly DetailMark[]): DetailMark {
+  const box = rectUnion(group.map((m) => ({ x: m.at[0] - m.radius, y: m.at[1] - m.radius, w: 2 * m.radius, h: 2 * m.radius })));
+  const at: Pt = [box.x + box.w / 2, box.y + box.h / 2];
+  const radius = Math.max(...group.map((m) => Math.hypot(m.at[0] - at[0], m.at[1] - at[1]) + m.radius));
+  const numbers = group.flatMap((m) => m.text.split(', ')).sort((a, b) => Number(a) - Number(b));
+  return { view: group[0]!.view, at, radius, text: numbers.join(', ') };
+}
+
+/**
+ * Marks as drawn on views at `scales` (1:n): marks whose circles or numbers would touch (two
+ * cuts at one place, e.g. a rabbet and the tongue it leaves) become one circle round both,
+ * numbered `1, 3`, and so on until no two marks on a view touch.
+ */
+export function mergeMarks(marks: readonly DetailMark[], scales: Readonly<Record<PartViewId, number>>): DetailMark[] {
+  let out = [...marks];
+  for (;;) {
+    const clash = out.flatMap((a, i) => out.slice(i + 1).map((b) => [a, b] as const)).find(([a, b]) => {
+      if (a.view !== b.view) return false;
+      const gap = MARK_GAP_MM * scales[a.view];
+      return rectsOverlap(inflate(markExtent(a, scales[a.view]), gap / 2), inflate(markExtent(b, scales[b.view]), gap / 2));
+    });
+    if (!clash) return out;
+    out = [...out.filter((m) => m !== clash[0] && m !== clash[1]), mergedMark(clash)];
+  }
+}
+
 /** A detail's mark on the part view: a pencil-red circle and its number (view mm). */
 export function markPrimitives(mark: DetailMark): Primitive[] {
-  const { at, radius } = mark;
   return [
-    { type: 'circle', centre: at, radius, kind: 'accent' },
-    { type: 'label', at: [at[0] + radius * 0.75, at[1] + radius * 0.75], text: mark.text, sizePt: 8, anchor: 'start', font: 'sans', bold: true, accent: true },
+    { type: 'circle', centre: mark.at, radius: mark.radius, kind: 'accent' },
+    { type: 'label', at: markLabelAt(mark), text: mark.text, sizePt: MARK_TEXT_PT, anchor: 'start', font: 'sans', bold: true, accent: true },
   ];
 }

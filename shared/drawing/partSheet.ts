@@ -8,7 +8,7 @@ import type { Feature, Part } from '../engine/types.ts';
 import { arrangeAt, centreIn, VIEW_GAP_MM, type Arrangement } from './arrange.ts';
 import { layoutView, translateView } from './dimensionLayout.ts';
 import { featureFaceText, featureKindText, featureSizeText } from './featureText.ts';
-import { jointDetails, type DetailMark, type JointDetail } from './jointDetails.ts';
+import { jointDetails, mergeMarks, type DetailMark, type JointDetail } from './jointDetails.ts';
 import { lengthText, partSizeText, type DrawingUnits } from './lengthText.ts';
 import { drawingArea, sheetSizeMm } from './paper.ts';
 import { chooseFaceUp } from './partFrame.ts';
@@ -62,14 +62,34 @@ interface Laid {
 }
 
 /**
+ * The part's views with `marks` merged as they would touch at the scales tried, built once for
+ * each distinct set of merged marks.
+ */
+function viewsWithMarks(part: Part, units: DrawingUnits, marks: readonly DetailMark[]): (face: number, end: number) => ReturnType<typeof partViews> {
+  const up = chooseFaceUp(part);
+  const built = new Map<string, ReturnType<typeof partViews>>();
+  return (face, end) => {
+    const merged = mergeMarks(marks, { face, edge: face, end });
+    const key = merged.map((m) => `${m.view}:${m.text}`).sort().join('|');
+    let views = built.get(key);
+    if (!views) {
+      views = partViews(part, units, up, merged);
+      built.set(key, views);
+    }
+    return views;
+  };
+}
+
+/**
  * The part's three views at the largest usual scale at which they fit `size` (the end view as
  * large as fits, within four times the main scale), or null when none does.
  */
 function partViewsFitting(part: Part, units: DrawingUnits, size: { w: number; h: number }, marks: readonly DetailMark[]): Laid | null {
-  const { face, edge, end } = partViews(part, units, chooseFaceUp(part), marks);
+  const viewsAt = viewsWithMarks(part, units, marks);
   const scales = usualScales(units);
   for (const s of scales) {
     for (const e of scales.filter((x) => x <= s && x * 4 >= s)) {
+      const { face, edge, end } = viewsAt(s, e);
       const arrangement: Arrangement[] = [{ view: face, place: 'anchor' }, { view: edge, place: 'below' }, { view: end, place: 'right', scale: e }];
       const { views, frame } = arrangeAt(arrangement, s);
       if (frame.w <= size.w && frame.h <= size.h) return { views, frame, scale: s };
@@ -80,9 +100,9 @@ function partViewsFitting(part: Part, units: DrawingUnits, size: { w: number; h:
 
 /** The part's views at the smallest usual scale, for a part too big for any (then shown as it is). */
 function partViewsSmallest(part: Part, units: DrawingUnits, marks: readonly DetailMark[]): Laid {
-  const { face, edge, end } = partViews(part, units, chooseFaceUp(part), marks);
   const scales = usualScales(units);
   const s = scales[scales.length - 1]!;
+  const { face, edge, end } = viewsWithMarks(part, units, marks)(s, s);
   return { ...arrangeAt([{ view: face, place: 'anchor' }, { view: edge, place: 'below' }, { view: end, place: 'right' }], s), scale: s };
 }
 

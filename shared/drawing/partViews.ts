@@ -11,7 +11,7 @@ import { markPrimitives, type DetailMark } from './jointDetails.ts';
 import { lengthText, type DrawingUnits } from './lengthText.ts';
 import { chooseFaceUp, inPlane, NORMAL, onAxis, partSize, partViewAxes, viewShowing, type FaceUp, type PartViewAxes, type PartViewId } from './partFrame.ts';
 import { partEdges, partGrid } from './partSolid.ts';
-import type { DimensionRequest, ModelView, Primitive, Pt } from './types.ts';
+import type { DimensionRequest, ModelView, Primitive, Pt, ViewNote } from './types.ts';
 
 const EPS = 0.01;
 const TITLES: Readonly<Record<PartViewId, string>> = { face: 'Face', edge: 'Edge', end: 'End' };
@@ -186,11 +186,15 @@ function addHoleLines(features: readonly Feature[], size: readonly [number, numb
   return done;
 }
 
-/** Circles and slot outlines with centre lines, for views that look onto the hole's face. */
-function holePrimitives(f: Feature, view: PartViewAxes, size: readonly [number, number, number], units: DrawingUnits): Primitive[] {
-  if (f.type !== 'hole' && f.type !== 'slot') return [];
+/**
+ * Circles and slot outlines with centre lines, and a note of the size, for views that look onto
+ * the hole's face; hidden lines for views that see it from the side.
+ */
+function holePrimitives(f: Feature, view: PartViewAxes, size: readonly [number, number, number], units: DrawingUnits): { primitives: Primitive[]; notes: ViewNote[] } {
+  const none = { primitives: [], notes: [] };
+  if (f.type !== 'hole' && f.type !== 'slot') return none;
   const m = f.removed[0];
-  if (!m) return [];
+  if (!m) return none;
   const n = NORMAL[f.face];
   const highFace = f.face.endsWith('-b');
   const map = (local: readonly number[]): Pt => [onAxis(view.u, size, local[view.u.axis]!), onAxis(view.v, size, local[view.v.axis]!)];
@@ -211,7 +215,7 @@ function holePrimitives(f: Feature, view: PartViewAxes, size: readonly [number, 
     out.push({ type: 'segment', a: [cx - hu - arm, cy], b: [cx + hu + arm, cy], kind: 'centre' });
     out.push({ type: 'segment', a: [cx, cy - hv - arm], b: [cx, cy + hv + arm], kind: 'centre' });
     const text = f.type === 'slot' ? `slot ${lengthText(f.diameterMm, units)} wide` : `${lengthText(f.diameterMm, units)} dia. × ${lengthText(f.depthMm, units)} deep`;
-    out.push({ type: 'label', at: [cx + hu + r + 1, cy + hv + r + 1], text, sizePt: 6.5, anchor: 'start', font: 'mono' });
+    return { primitives: out, notes: [{ text, target: { x: cx - hu - r, y: cy - hv - r, w: 2 * (hu + r), h: 2 * (hv + r) } }] };
   } else {
     // Seen from the side, a hole is two hidden lines as deep as it goes.
     const runAxis = f.type === 'slot' ? (f.along === 'length' ? 0 : 1) : null;
@@ -227,7 +231,7 @@ function holePrimitives(f: Feature, view: PartViewAxes, size: readonly [number, 
       out.push({ type: 'segment', a: map(a), b: map(b), kind: 'hidden' });
     }
   }
-  return out;
+  return { primitives: out, notes: [] };
 }
 
 function obround(cx: number, cy: number, hu: number, hv: number, r: number): Pt[] {
@@ -244,17 +248,16 @@ function obround(cx: number, cy: number, hu: number, hv: number, r: number): Pt[
   return pts;
 }
 
-/** Identical hole and slot labels are written once, on the first, with the count: `3× …`. */
-function oneLabelEach(primitives: readonly Primitive[]): Primitive[] {
+/** Identical hole and slot notes are written once, at the first, with the count: `3× …`. */
+function oneNoteEach(notes: readonly ViewNote[]): ViewNote[] {
   const counts = new Map<string, number>();
-  for (const p of primitives) if (p.type === 'label') counts.set(p.text, (counts.get(p.text) ?? 0) + 1);
+  for (const n of notes) counts.set(n.text, (counts.get(n.text) ?? 0) + 1);
   const done = new Set<string>();
-  return primitives.flatMap((p): Primitive[] => {
-    if (p.type !== 'label') return [p];
-    if (done.has(p.text)) return [];
-    done.add(p.text);
-    const n = counts.get(p.text) ?? 1;
-    return [n > 1 ? { ...p, text: `${n}× ${p.text}` } : p];
+  return notes.flatMap((n): ViewNote[] => {
+    if (done.has(n.text)) return [];
+    done.add(n.text);
+    const count = counts.get(n.text) ?? 1;
+    return [count > 1 ? { ...n, text: `${count}× ${n.text}` } : n];
   });
 }
 
@@ -277,12 +280,13 @@ export function partViews(part: Part, units: DrawingUnits, up: FaceUp = chooseFa
   const out = {} as Record<PartViewId, ModelView>;
   for (const id of ['face', 'edge', 'end'] as const) {
     const va = axes[id];
+    const holes = part.features.map((f) => holePrimitives(f, va, size, units));
     const primitives: Primitive[] = [
-      ...partEdges(part, va, grid), ...oneLabelEach(part.features.flatMap((f) => holePrimitives(f, va, size, units))),
+      ...partEdges(part, va, grid), ...holes.flatMap((h) => h.primitives),
       ...marks.filter((m) => m.view === id).flatMap(markPrimitives),
     ];
     const view: ModelView = {
-      id, title: TITLES[id], primitives, dimensions: dims.byView[id], callouts: [],
+      id, title: TITLES[id], primitives, dimensions: dims.byView[id], callouts: [], notes: oneNoteEach(holes.flatMap((h) => h.notes)),
       bounds: { x: 0, y: 0, w: size[va.u.axis], h: size[va.v.axis] },
     };
     // Face and edge views run along the length (u is local x), so a break shortens both alike.

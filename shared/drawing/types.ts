@@ -100,6 +100,16 @@ export interface DimensionRequest {
   key?: string;
 }
 
+/**
+ * A note naming a feature, e.g. `12× 1/4" dia. × 3/8" deep` for a line of holes: the layout sets
+ * it beside `target` (the first feature it names, model mm) on paper, clear of the view's holes
+ * and texts, with a leader when it has to stand off.
+ */
+export interface ViewNote {
+  text: string;
+  target: Rect;
+}
+
 /** A view in model space: primitives in mm of the piece (y up) and the dimensions it wants. */
 export interface ModelView {
   id: string;
@@ -108,6 +118,8 @@ export interface ModelView {
   dimensions: readonly DimensionRequest[];
   /** Part labels for the exploded view: the point a leader starts at and the text. */
   callouts: readonly { at: Pt; text: string }[];
+  /** Notes naming a feature (a hole's size), set on paper clear of every feature. */
+  notes?: readonly ViewNote[];
   /** Extent of the drawn geometry in model mm. */
   bounds: Rect;
 }

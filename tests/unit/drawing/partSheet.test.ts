@@ -1,0 +1,67 @@
+import { describe, expect, it } from 'vitest';
+import { primitiveRect } from '../../../shared/drawing/dimensionLayout.ts';
+import { partLetters } from '../../../shared/drawing/partLetters.ts';
+import { partSheet } from '../../../shared/drawing/partSheet.ts';
+import { rectsOverlap, rectUnion } from '../../../shared/drawing/rects.ts';
+import type { Primitive, Rect, Sheet } from '../../../shared/drawing/types.ts';
+import { buildPiece, defaultSpec } from '../../../shared/engine/index.ts';
+
+const KINDS = ['chest', 'dresser', 'cabinet'] as const;
+
+/** Every part sheet of the default piece of `kind`, inch drawings on Letter landscape. */
+function sheetsOf(kind: (typeof KINDS)[number]): { partId: string; sheet: Omit<Sheet, 'number'> }[] {
+  const result = buildPiece(defaultSpec(kind));
+  const letters = partLetters(result);
+  return result.parts.map((p) => ({ partId: p.id, sheet: partSheet(p, letters.get(p.id)!, { size: 'letter', orientation: 'landscape' }, 'in') }));
+}
+const built = Object.fromEntries(KINDS.map((k) => [k, sheetsOf(k)])) as Record<(typeof KINDS)[number], ReturnType<typeof sheetsOf>>;
+
+/** A detail mark as drawn: its pencil-red circle and, next in order, its number. */
+function markBoxes(primitives: readonly Primitive[]): { text: string; box: Rect }[] {
+  const out: { text: string; box: Rect }[] = [];
+  primitives.forEach((p, i) => {
+    const label = primitives[i + 1];
+    if (p.type === 'circle' && p.kind === 'accent' && label?.type === 'label' && label.accent) {
+      out.push({ text: label.text, box: rectUnion([primitiveRect(p), primitiveRect(label)]) });
+    }
+  });
+  return out;
+}
+
+describe('partSheet', () => {
+  it.each(KINDS)('keeps every detail mark and its number clear of every other on the default %s', (kind) => {
+    let marks = 0;
+    for (const { partId, sheet } of built[kind]) {
+      const boxes = sheet.views.flatMap((v) => markBoxes(v.primitives));
+      marks += boxes.length;
+      for (let i = 0; i < boxes.length; i++) {
+        for (let j = i + 1; j < boxes.length; j++) {
+          expect(rectsOverlap(boxes[i]!.box, boxes[j]!.box), `${partId}: marks ${boxes[i]!.text} and ${boxes[j]!.text} touch`).toBe(false);
+        }
+      }
+    }
+    expect(marks).toBeGreaterThan(0);
+  });
+
+  it.each(KINDS)('sets the size notes of holes and slots clear of every hole and slot on the default %s', (kind) => {
+    let notes = 0;
+    for (const { partId, sheet } of built[kind]) {
+      for (const view of sheet.views) {
+        const features = view.primitives.filter((p) => (p.type === 'circle' && p.kind !== 'accent' && p.radius > 0.5) || (p.type === 'polygon' && p.fill === null)).map(primitiveRect);
+        const labels = view.primitives.filter((p) => p.type === 'label' && / dia\. × |^(\d+× )?slot /.test(p.text));
+        notes += labels.length;
+        for (const label of labels) {
+          const box = primitiveRect(label);
+          for (const f of features) expect(rectsOverlap(box, f), `${partId} ${view.id}: "${label.type === 'label' ? label.text : ''}" on a hole`).toBe(false);
+        }
+      }
+    }
+    if (kind !== 'dresser') expect(notes).toBeGreaterThan(0);
+  });
+
+  it('draws a rabbet and the tongue it leaves, taken at one place, as one mark with both numbers', () => {
+    const panel = built.chest.find((s) => s.partId === 'front-panel' || /panel/.test(s.partId))!;
+    const texts = panel.sheet.views.flatMap((v) => markBoxes(v.primitives)).map((m) => m.text);
+    expect(texts.some((t) => /^\d+(, \d+)+$/.test(t))).toBe(true);
+  });
+});
