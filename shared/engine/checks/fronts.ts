@@ -111,3 +111,27 @@ export function revealChecks(partIds: readonly string[], frame: FrameWidths | nu
     fix: `For an even ${both(even)} all round make the top and bottom rails ${both(even + overlayMm)} wide and the rails between rows and the mullions ${both(even + 2 * overlayMm)} wide.`,
   })];
 }
+
+/**
+ * Reveals round overlay fronts on a leg-and-rail case, whose legs are wider than its rails by
+ * design: the rails (top, bottom, between rows) should show alike, and the legs and mullions
+ * alike. `laps` is how far the fronts lap a rail between rows and a mullion, `gapMm` the gap
+ * between fronts (mm).
+ */
+export function legAndRailRevealChecks(partIds: readonly string[], frame: FrameWidths, overlayMm: number, gapMm: number, laps: { railMm: number; mullionMm: number }, rows: number, columns: number): Check[] {
+  const rails: Record<string, number> = { topRailShowsMm: frame.topRailMm - overlayMm, bottomRailShowsMm: frame.bottomRailMm - overlayMm };
+  if (rows > 1) rails.midRailShowsMm = frame.midRailMm - 2 * laps.railMm;
+  const uprights: Record<string, number> = { legShowsMm: frame.stileMm - overlayMm };
+  if (columns > 1) uprights.mullionShowsMm = frame.mullionMm - 2 * laps.mullionMm;
+  const spreadOf = (group: Record<string, number>) => Math.max(...Object.values(group)) - Math.min(...Object.values(group));
+  const railSpread = spreadOf(rails);
+  const uprightSpread = spreadOf(uprights);
+  if (railSpread <= REVEAL_TOLERANCE_MM && uprightSpread <= REVEAL_TOLERANCE_MM) return [];
+  const list = (group: Record<string, number>, names: Record<string, string>) => Object.entries(group).map(([k, v]) => `${both(v)} ${names[k]}`).join(', ');
+  return [check({
+    id: 'reveals-uneven', severity: 'warning', title: 'Uneven reveals around the fronts', partIds,
+    numbers: { ...rails, ...uprights, railSpreadMm: railSpread, uprightSpreadMm: uprightSpread, overlayMm },
+    message: `With a ${both(overlayMm)} overlay the rails show ${list(rails, { topRailShowsMm: 'at the top', bottomRailShowsMm: 'at the bottom', midRailShowsMm: 'between rows' })}, and the uprights ${list(uprights, { legShowsMm: 'at the legs', mullionShowsMm: 'at the mullions' })}: a spread of ${both(Math.max(railSpread, uprightSpread))}.`,
+    fix: `Keep the overlay at most ${both(Math.min(frame.topRailMm, frame.bottomRailMm, frame.stileMm) - gapMm)} and the mullions at most ${both(frame.stileMm + overlayMm)} wide, so the fronts can lap the rails and mullions to match.`,
+  })];
+}

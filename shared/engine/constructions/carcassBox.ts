@@ -11,6 +11,7 @@ import { boxBetween, boxContains } from '../geometry/box.ts';
 import type { FeatureDraft } from '../geometry/featureDescribe.ts';
 import type { AxisMap } from '../geometry/placement.ts';
 import type { Box3, Material } from '../types.ts';
+import { drawerNamer } from './drawerBox.ts';
 import { wallPartNamer } from './naming.ts';
 
 /** How the top and bottom meet the sides. */
@@ -35,6 +36,11 @@ export interface CarcassBoxOptions {
   back: { sheet: Material; thicknessMm: number; fit: BackFit; /** Groove fit: wood left behind the groove. */ grooveSetInMm: number };
   /** Centres (world X) of vertical dividers, bottom to top. */
   dividerXs: readonly number[];
+  /**
+   * Height bands (world Z) where web frames run through from side to side: each divider stops
+   * under a band and starts again on top of it, one piece per row.
+   */
+  dividerBreaksZ?: readonly (readonly [number, number])[];
   /** Cuts other constructions need in the carcass parts, in world coordinates. */
   extraFeatures: readonly FeatureDraft[];
   /** Cuts in the top panel or a stretcher (screw holes and slots for a top), given its world box. */
@@ -54,7 +60,10 @@ export interface CarcassBox {
   /** The top panel, or the front and back stretchers. */
   tops: PartDraft[];
   back: PartDraft;
+  /** Every divider piece: one per divider, or with breaks one per divider and row. */
   dividers: PartDraft[];
+  /** Divider `i`'s piece that spans world height `z`. */
+  dividerAt: (i: number, z: number) => PartDraft;
   /** Clear inside: sides' inner faces, front edge to the back's front face, bottom's top to the top's underside (mm). */
   inside: Box3;
   /** The part each extra feature went to. */
@@ -166,13 +175,23 @@ export function carcassBox(o: CarcassBoxOptions): CarcassBox {
   };
 
   const dividerY: [number, number] = [y0, groove ? backY[0] : y1 - bt];
-  const dividers = o.dividerXs.map((xc, i): PartDraft => ({
-    group: 'case/divider', member: `divider-${i + 1}`, label: `drawer divider ${i + 1}`, role: 'divider', material: o.sheet, grain: 'none',
-    size: [topUnderside + d - (bottomZ[1] - d), dividerY[1] - dividerY[0], t], axes: { length: '+Z', width: '+Y', thickness: '-X' },
-    world: boxBetween([xc - t / 2, dividerY[0], bottomZ[1] - d], [xc + t / 2, dividerY[1], topUnderside + d]),
-    explodeMm: explodeOut(0, -0.5, 0), features: [], notes: banded([], topUnderside - bottomZ[1] + 2 * d),
-    name: () => ({ id: 'divider', name: 'Drawer divider' }),
-  }));
+  // Pieces between the breaks, top first: the top one in the dado above, the bottom one in the bottom's dado.
+  const breaks = [...(o.dividerBreaksZ ?? [])].sort((a, b) => b[0] - a[0]);
+  const spans: [number, number][] = [];
+  let upper = topUnderside + d;
+  for (const band of breaks) {
+    spans.push([band[1], upper]);
+    upper = band[0];
+  }
+  spans.push([bottomZ[1] - d, upper]);
+  const dividerPieces = o.dividerXs.map((xc, i): PartDraft[] => spans.map((zs, row): PartDraft => ({
+    group: 'case/divider', member: spans.length === 1 ? `divider-${i + 1}` : `row-${row + 1}`, label: `drawer divider ${i + 1}${spans.length === 1 ? '' : `, row ${row + 1}`}`, role: 'divider', material: o.sheet, grain: 'none',
+    size: [zs[1] - zs[0], dividerY[1] - dividerY[0], t], axes: { length: '+Z', width: '+Y', thickness: '-X' },
+    world: boxBetween([xc - t / 2, dividerY[0], zs[0]], [xc + t / 2, dividerY[1], zs[1]]),
+    explodeMm: explodeOut(0, -0.5, 0), features: [], notes: banded([], zs[1] - zs[0]),
+    name: spans.length === 1 ? () => ({ id: 'divider', name: 'Drawer divider' }) : drawerNamer('divider', 'Drawer divider'),
+  })));
+  const dividers = dividerPieces.flat();
 
   // Extra cuts go to the part that holds them.
   const hosts = [left, right, bottom, ...tops, back, ...dividers];
@@ -194,14 +213,19 @@ export function carcassBox(o: CarcassBoxOptions): CarcassBox {
     for (const top of tops) joints.push({ type: j, a: { draft: top, featureIds: [] }, b: { draft: s, featureIds: [`${j}-top`] }, clearanceMm: 0, glued: true, floating: false, note: `Glued into the side's ${j}.` });
     joints.push({ type: groove ? 'back-in-groove' : 'back-in-rabbet', a: { draft: back, featureIds: [] }, b: { draft: s, featureIds: [groove ? 'groove-back' : 'rabbet-back'] }, clearanceMm: 0, glued: !groove, floating: false, note: back.notes[0]! });
   }
-  for (const div of dividers) {
-    joints.push({ type: 'dado', a: { draft: div, featureIds: [] }, b: { draft: bottom, featureIds: [] }, clearanceMm: 0, glued: true, floating: false, note: 'Divider glued into the bottom\'s dado.' });
-    for (const top of tops) joints.push({ type: 'dado', a: { draft: div, featureIds: [] }, b: { draft: top, featureIds: [] }, clearanceMm: 0, glued: true, floating: false, note: 'Divider glued into the dado above.' });
+  for (const pieces of dividerPieces) {
+    joints.push({ type: 'dado', a: { draft: pieces[pieces.length - 1]!, featureIds: [] }, b: { draft: bottom, featureIds: [] }, clearanceMm: 0, glued: true, floating: false, note: 'Divider glued into the bottom\'s dado.' });
+    for (const top of tops) joints.push({ type: 'dado', a: { draft: pieces[0]!, featureIds: [] }, b: { draft: top, featureIds: [] }, clearanceMm: 0, glued: true, floating: false, note: 'Divider glued into the dado above.' });
   }
 
   return {
     drafts: [left, right, bottom, ...tops, back, ...dividers],
     joints, left, right, bottom, tops, back, dividers,
+    dividerAt: (i, z) => {
+      const piece = dividerPieces[i]?.find((pc) => z >= pc.world.min[2] - 1e-6 && z <= pc.world.max[2] + 1e-6);
+      assert(piece, `divider ${i + 1} stands at height ${z}`);
+      return piece;
+    },
     inside: boxBetween([inX[0], y0, bottomZ[1]], [inX[1], backY[0], topUnderside]),
     ownerOf: (f) => {
       const owner = owners.get(f);

@@ -11,7 +11,7 @@
 import type { JointDraft, PartDraft, PartNamer } from '../assembly.ts';
 import { boxBetween } from '../geometry/box.ts';
 import type { FeatureDraft } from '../geometry/featureDescribe.ts';
-import type { Box3, Material } from '../types.ts';
+import type { Box3, GlueUpPlan, Material } from '../types.ts';
 import { plainPart } from './plainPart.ts';
 
 /** How the box's corners are joined. */
@@ -35,6 +35,8 @@ export interface DrawerBoxOptions {
   bottomSetUpMm: number;
   /** Gap between the bottom's edges and the groove bottoms. */
   bottomClearanceMm: number;
+  /** The glue-up a solid part of this finished width (mm) needs, if the boards are narrower. */
+  glueUpFor?: (widthMm: number) => GlueUpPlan | undefined;
   explodeMm: number;
 }
 
@@ -89,6 +91,10 @@ export function drawerBox(o: DrawerBoxOptions): DrawerBox {
       { id: 'groove-bottom', type: 'groove', label: 'groove for the bottom', faceDir, removed: [boxBetween([inner - dir * gd, by0, gz[0]], [inner, by1, gz[1]])] },
     ];
   };
+  const glued = (widthMm: number) => {
+    const plan = o.glueUpFor?.(widthMm);
+    return plan ? { glueUp: plan } : {};
+  };
   const sideNamer = drawerNamer('drawer-side', 'Drawer side');
   const sides = (['left', 'right'] as const).map((which) => {
     const left = which === 'left';
@@ -96,7 +102,7 @@ export function drawerBox(o: DrawerBoxOptions): DrawerBox {
       group: 'drawer/side', member, label: `drawer side, ${o.where}, ${which}`, role: 'drawer-side', material: o.stock, grain: 'length',
       world: left ? boxBetween([bx0, by0, bz0], [bx0 + st, by1, bz1]) : boxBetween([bx1 - st, by0, bz0], [bx1, by1, bz1]),
       axes: left ? { length: '+Y', width: '+Z', thickness: '+X' } : { length: '-Y', width: '+Z', thickness: '-X' },
-      explodeMm: [left ? -ex : ex, -ex, 0], features: sideCuts(left ? bx0 + st : bx1 - st, left ? 1 : -1), name: sideNamer,
+      explodeMm: [left ? -ex : ex, -ex, 0], features: sideCuts(left ? bx0 + st : bx1 - st, left ? 1 : -1), name: sideNamer, ...glued(bz1 - bz0),
     });
   });
 
@@ -124,12 +130,12 @@ export function drawerBox(o: DrawerBoxOptions): DrawerBox {
   const frontPart = plainPart({
     group: 'drawer/front', member, label: `drawer box front, ${o.where}`, role: 'drawer-end', material: o.stock, grain: 'length',
     world: boxBetween([bx0 + st - dd, front[0], bz0], [bx1 - st + dd, front[1], bz1]), axes: { length: '+X', width: '+Z', thickness: '-Y' },
-    explodeMm: [0, -2 * ex, 0], features: endCuts(front, '-Y', true, bz0), name: drawerNamer('drawer-box-front', 'Drawer box front'),
+    explodeMm: [0, -2 * ex, 0], features: endCuts(front, '-Y', true, bz0), name: drawerNamer('drawer-box-front', 'Drawer box front'), ...glued(bz1 - bz0),
   });
   const backPart = plainPart({
     group: 'drawer/back', member, label: `drawer back, ${o.where}`, role: 'drawer-end', material: o.stock, grain: 'length',
     world: boxBetween([bx0 + st - dd, back[0], gz[1]], [bx1 - st + dd, back[1], bz1]), axes: { length: '-X', width: '+Z', thickness: '+Y' },
-    explodeMm: [0, ex, 0], features: endCuts(back, '+Y', false, gz[1]), notes: ['Sits on the bottom; screw the bottom up into it.'], name: drawerNamer('drawer-back', 'Drawer back'),
+    explodeMm: [0, ex, 0], features: endCuts(back, '+Y', false, gz[1]), notes: ['Sits on the bottom; screw the bottom up into it.'], name: drawerNamer('drawer-back', 'Drawer back'), ...glued(bz1 - gz[1]),
   });
   const c = o.bottomClearanceMm;
   const bottomPart = plainPart({

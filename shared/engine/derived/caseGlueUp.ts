@@ -19,6 +19,9 @@ export function caseGlueUpStages(parts: readonly Part[]): GlueUpStage[] {
   const framedPanels = parts.filter((p) => p.role === 'panel').map((p) => p.id);
   const sideFrame = parts.filter((p) => (p.role === 'rail' || p.role === 'stile') && p.id.startsWith('side-')).map((p) => p.id);
   const joining = parts.filter((p) => (p.role === 'rail' || p.role === 'stile') && !p.id.startsWith('side-')).map((p) => p.id);
+  // A carcass's web frames are glued up flat, then let into the sides with the bottom and top.
+  const webFrameParts = legs.length > 0 ? [] : parts.filter((p) => p.id.startsWith('web-frame') || p.id.startsWith('dust-panel')).map((p) => p.id);
+  const dustPanels = webFrameParts.filter((id) => id.startsWith('dust-panel'));
   const framed: Omit<GlueUpStage, 'stage'>[] = legs.length === 0 ? [] : [
     {
       title: 'The two sides on their legs',
@@ -38,16 +41,17 @@ export function caseGlueUpStages(parts: readonly Part[]): GlueUpStage[] {
       steps: [
         ...glued.map((p) => ({ title: `Edge-glue the ${p.name.toLowerCase()} from ${p.glueUp!.boards} boards`, partIds: [p.id], notes: ['Alternate clamps above and below; flatten after the glue cures.'] })),
         { title: 'Pocket-screw and glue the face frame', partIds: ids(parts, ['face-frame']), notes: ['Glue and screw on a flat surface; check the diagonals.'] },
+        { title: 'Glue up each web frame: runners into the front rail, the back rail and dust panels dry', partIds: webFrameParts, notes: ['Glue the runners\' front tenons only; check each frame for square and flat.'] },
         { title: 'Glue each door frame round its panel, the panel dry', partIds: [...ids(parts, ['door-frame']), ...doorPanels], notes: ['Glue only the stub tenons; keep glue out of the panel grooves.', 'Check each door for square and flat.'] },
         { title: 'Glue the drawer boxes with their bottoms slid in dry', partIds: [...ids(parts, ['drawer-side', 'drawer-end']), ...drawerBottoms], notes: ['Square each box to its bottom, then screw the bottom up into the back.'] },
         { title: 'Glue the edge strips to the shelves', partIds: ids(parts, ['edge-strip', 'shelf']), notes: ['Flush at the top; plane or scrape after the glue cures.'] },
       ].filter((s) => s.partIds.length > 0),
-      floatingPartIds: [...doorPanels, ...drawerBottoms],
+      floatingPartIds: [...doorPanels, ...drawerBottoms, ...dustPanels],
     },
     {
       title: 'The carcass',
       steps: [
-        { title: 'Glue the bottom, top or stretchers, dividers and fixed shelves into the sides', partIds: ids(parts, ['case-side', 'case-bottom', 'case-top', 'stretcher', 'divider']), notes: ['Dry-fit first; clamp across every dado; check the diagonals.'] },
+        { title: 'Glue the bottom, top or stretchers, web frames, dividers and fixed shelves into the sides', partIds: [...ids(parts, ['case-side', 'case-bottom', 'case-top', 'stretcher', 'divider']), ...webFrameParts.filter((id) => id.endsWith('-rail'))], notes: ['Dry-fit first; clamp across every dado; check the diagonals.'] },
         { title: grooveBack ? 'Slide the back into its grooves' : 'Square the case, then glue and pin the back into its rabbets', partIds: ids(parts, ['back']), notes: ['The back holds the case square: fit it before the glue in the dadoes sets.'] },
       ].filter((s) => s.partIds.length > 0),
       floatingPartIds: grooveBack ? ids(parts, ['back']) : [],
@@ -57,7 +61,7 @@ export function caseGlueUpStages(parts: readonly Part[]): GlueUpStage[] {
       steps: [
         { title: 'Glue the face frame to the carcass', partIds: [...ids(parts, ['face-frame']), ...ids(parts, ['case-side'])], notes: ['Clamp with cauls; the frame may stand proud a hair and be planed flush.'] },
         { title: 'Build the base and screw the carcass down to it', partIds: ids(parts, ['base']), notes: ['Level the base on the floor first.'] },
-        { title: 'Screw in the drawer runners or slides', partIds: ids(parts, ['runner']), notes: ['Set them level and parallel from a spacer board.'] },
+        { title: 'Screw in the drawer runners or slides', partIds: ids(parts, ['runner']).filter((id) => !webFrameParts.includes(id)), notes: ['Set them level and parallel from a spacer board.'] },
       ].filter((s) => s.partIds.length > 0),
       floatingPartIds: [],
     },

@@ -20,7 +20,9 @@ import { frontGrainMatch } from '../constructions/frontGrid.ts';
 import { plainPart } from '../constructions/plainPart.ts';
 import { shelves as buildShelves, type HoleLine } from '../constructions/shelves.ts';
 import { SLIDE_RULES } from '../constructions/slides.ts';
+import { webFrame } from '../constructions/webFrame.ts';
 import { boxBetween, boxSize, boxUnion } from '../geometry/box.ts';
+import type { FeatureDraft } from '../geometry/featureDescribe.ts';
 import { sectionStiffnessNmm2, type SectionPiece } from '../structure/beam.ts';
 import type { Check, GlueUpPlan, Material } from '../types.ts';
 import { drawerFitChecks, drawerTravelCheck, undermountSetUpCheck } from '../checks/drawerFit.ts';
@@ -30,7 +32,7 @@ import { panelFloatCheck } from '../checks/panelFloat.ts';
 import { shelfSagCheck } from '../checks/shelfSag.ts';
 import { stockSizeChecks } from '../checks/stock.ts';
 import { roughSizer, type ChestBuild } from './chest.ts';
-import { caseLayout, SOLID_STOCK_MM, type CaseLayout, type CasePlan } from './caseLayout.ts';
+import { caseLayout, SOLID_STOCK_MM, WEB_FRAME_CLEARANCE_MM, WEB_FRAME_GROOVE_DEPTH_MM, type CaseLayout, type CasePlan } from './caseLayout.ts';
 
 /** Doors of a cabinet (mm). */
 export interface DoorOptions {
@@ -69,6 +71,20 @@ export function doorPanelFloat(dO: DoorOptions, doorWidthMm: number, speciesId: 
   const float = panelFloat({ panelWidthMm: acrossGrain, material: dO.frame.panel === 'solid' ? speciesId : dO.frame.panelSheet, sawn: 'unknown', grooveDepthMm: dO.frame.grooveDepthMm, climate });
   return { acrossGrain, float };
 }
+
+/**
+ * Glue-ups for drawer-box parts: a part whose rough width (finished plus the width allowance)
+ * is wider than the widest board is glued up from boards that are, each with its allowance.
+ */
+export function drawerStockGlueUp(p: Pick<CaseBuildParams, 'maxBoardWidth' | 'widthAllowance'>): (widthMm: number) => GlueUpPlan | undefined {
+  return (widthMm) => {
+    if (widthMm + p.widthAllowance <= p.maxBoardWidth) return undefined;
+    const widths = glueUpBoardWidthsMm({ panelWidthMm: widthMm, maxBoardWidthMm: p.maxBoardWidth - p.widthAllowance, arrangement: 'equal' });
+    return { boards: widths.length, boardWidthMm: widths[0]! };
+  };
+}
+
+type CaseBuildParams = CasePlan['p'];
 
 /** What a builder returns before derived outputs: the chest's shape. */
 export type CaseBuild = ChestBuild;
@@ -114,6 +130,16 @@ export function buildCase(plan: CasePlan, extras: CaseExtras): CaseBuild {
     };
   })() : null;
 
+  // Dadoes across the sides for the web frames between drawer rows.
+  const wf = lay.webFrames;
+  const webFrameDadoes: FeatureDraft[] = (wf?.bandsZ ?? []).flatMap((band, k) => (['left', 'right'] as const).map((side): FeatureDraft => {
+    const xs: [number, number] = side === 'left' ? [inside.x[0] - p.jointDepth, inside.x[0]] : [inside.x[1], inside.x[1] + p.jointDepth];
+    return {
+      id: `dado-web-frame-${k + 1}`, idTemplate: 'dado-web-frame-{n}', type: 'dado', label: 'dado for a web frame', faceDir: side === 'left' ? '+X' : '-X',
+      removed: [boxBetween([xs[0], wf!.frontRailY[0], band[0]], [xs[1], wf!.backRailY[1], band[1]])],
+    };
+  }));
+
   // Carcass, with the top's screw holes and slots in its stretchers.
   const top = plan.top;
   const cb = lay.carcassBox;
@@ -123,12 +149,36 @@ export function buildCase(plan: CasePlan, extras: CaseExtras): CaseBuild {
     sheet: carcassSheet, thicknessMm: t, joinery: p.carcassJoinery, jointDepthMm: p.jointDepth, dadoEndWallMm: p.dadoEndWall,
     top: top ? 'stretchers' : 'panel', stretcherWidthMm: top?.stretcherWidthMm ?? 0,
     back: { sheet: sheet(p.backSheet), thicknessMm: lay.backThicknessMm, fit: p.backFit, grooveSetInMm: p.backGrooveSetIn },
-    dividerXs: lay.dividerXs, extraFeatures: shelfSet?.built.sideFeatures ?? [], edgeBanded: !p.faceFrame,
+    dividerXs: lay.dividerXs, dividerBreaksZ: wf?.bandsZ ?? [], extraFeatures: [...(shelfSet?.built.sideFeatures ?? []), ...webFrameDadoes], edgeBanded: !p.faceFrame,
     ...(top ? { topFeatures: (which: 'top' | 'front' | 'back', world) => stretcherFasteners(which === 'back' ? 'back' : 'front', world, { fixedLineYMm: fixedLineY, screwDiameterMm: p.screwDiameter, species: top.material === 'solid' ? species.id : null, climate: plan.climate }) } : {}),
     explodeMm,
   });
   drafts.push(...carcass.drafts);
   joints.push(...carcass.joints);
+
+  // Web frames in their dadoes; the dividers stand on their centre runners.
+  const frames = (wf?.bandsZ ?? []).map((band, k) => webFrame({
+    index: k, z: band, x: inside.x, frontRailY: wf!.frontRailY, backRailY: wf!.backRailY, ends: { kind: 'dado', depthMm: p.jointDepth },
+    runnersX: wf!.runnersX, material: solid, grooveWidthMm: wf!.grooveWidthMm, grooveDepthMm: WEB_FRAME_GROOVE_DEPTH_MM, tongueClearanceMm: WEB_FRAME_CLEARANCE_MM,
+    shoulderMm: WEB_FRAME_GROOVE_DEPTH_MM, ...(wf!.dustPanelSheet ? { dustPanel: { material: sheet(wf!.dustPanelSheet) } } : {}), explodeMm: explodeMm * 0.5,
+  }));
+  frames.forEach((frame, k) => {
+    drafts.push(...frame.drafts);
+    joints.push(...frame.joints);
+    const dado = `dado-web-frame-${k + 1}`;
+    const housed = [frame.frontRail, frame.backRail];
+    for (const [side, runner] of [[carcass.left, frame.runners[0]!], [carcass.right, frame.runners[frame.runners.length - 1]!]] as const) {
+      for (const part of [...housed, runner]) {
+        joints.push({ type: 'dado', a: { draft: part, featureIds: [] }, b: { draft: side, featureIds: [dado] }, clearanceMm: 0, glued: part !== runner, floating: false, note: part === runner ? 'Runner sits in the dado dry, so the frame goes in square.' : 'Rail glued into the side\'s dado.' });
+      }
+    }
+    const [bottom, top] = wf!.bandsZ[k]!;
+    lay.dividerXs.forEach((_, i) => {
+      for (const z of [bottom - 1, top + 1]) {
+        joints.push({ type: 'butt-screwed', a: { draft: carcass.dividerAt(i, z), featureIds: [] }, b: { draft: frame.runners[i + 1]!, featureIds: [] }, clearanceMm: 0, glued: true, floating: false, note: 'Divider glued and screwed through the web frame\'s runner.' });
+      }
+    });
+  });
   if (shelfSet) {
     drafts.push(...shelfSet.built.drafts);
     joints.push(...shelfSet.built.jointsWith(carcass.left, carcass.right));
@@ -194,7 +244,7 @@ export function buildCase(plan: CasePlan, extras: CaseExtras): CaseBuild {
         box: boxBetween([dl.box.x[0], dl.box.y[0], dl.box.z[0]], [dl.box.x[1], dl.box.y[1], dl.box.z[1]]), row: dl.row + 1, where,
         stock, sideThicknessMm: d.sideThicknessMm, endThicknessMm: d.sideThicknessMm, joinery: d.joinery,
         bottom: { sheet: sheet(d.bottomSheet), thicknessMm: bottomSheet.thicknessMm }, bottomGrooveDepthMm: d.bottomGrooveDepthMm,
-        bottomSetUpMm: d.bottomSetUpMm, bottomClearanceMm: 25.4 / 32, explodeMm: explodeMm * 0.4,
+        bottomSetUpMm: d.bottomSetUpMm, bottomClearanceMm: 25.4 / 32, glueUpFor: drawerStockGlueUp(p), explodeMm: explodeMm * 0.4,
       });
       drafts.push(front, ...box.drafts);
       joints.push(...box.joints);
@@ -203,11 +253,15 @@ export function buildCase(plan: CasePlan, extras: CaseExtras): CaseBuild {
         const i = side === 'left' ? dl.col - 1 : dl.col;
         if (side === 'left' && dl.col === 0) return carcass.left;
         if (side === 'right' && dl.col === plan.columns - 1) return carcass.right;
-        return carcass.dividers[i]!;
+        return carcass.dividerAt(i, (dl.box.z[0] + dl.box.z[1]) / 2);
       };
+      // A drawer over a web frame rides on its runners.
+      const frameUnder = frames[dl.row];
       for (const [i, side] of [[0, 'left'], [1, 'right']] as const) {
         let support = wall(side);
-        if (d.slide === 'wood-runners') {
+        if (d.slide === 'wood-runners' && frameUnder) {
+          support = frameUnder.runners[dl.col + i]!;
+        } else if (d.slide === 'wood-runners') {
           const zTop = dl.opening.z[0];
           const zBot = Math.max(inside.z[0], zTop - p.faceFrameMidRail);
           if (zTop - zBot < 1) continue;

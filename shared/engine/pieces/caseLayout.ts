@@ -41,7 +41,34 @@ export interface DrawerPlan {
   depthMm: number;
   rearClearanceMm: number;
   species: CaseParams['species'];
+  /** Web frames between the rows, behind the face frame's rails; absent or null: none. */
+  webFrames?: WebFramePlan | null;
 }
+
+/** Web frames between drawer rows in a face-framed carcass (mm). */
+export interface WebFramePlan {
+  /** A sheet dust panel in each bay, or an open frame. */
+  dustPanelSheet: CaseParams['backSheet'] | null;
+  railDepthMm: number;
+  runnerWidthMm: number;
+}
+
+/** Where the web frames go (world mm): one band per boundary between rows, top first. */
+export interface WebFrameLayout {
+  bandsZ: [number, number][];
+  frontRailY: [number, number];
+  backRailY: [number, number];
+  /** Side runners and one under each divider, left to right. */
+  runnersX: [number, number][];
+  grooveWidthMm: number;
+  dustPanelSheet: CaseParams['backSheet'] | null;
+}
+
+/** Web frames are 3/4 in stock, grooved 1/4 in deep, with 1/16 in at each tenon or panel edge. Common practice, no published source. */
+export const WEB_FRAME_GROOVE_DEPTH_MM = 0.25 * 25.4;
+export const WEB_FRAME_CLEARANCE_MM = 25.4 / 16;
+/** Groove for the runners' tenons in an open web frame: 1/4 in. Common practice, no published source. */
+const OPEN_FRAME_GROOVE_MM = 0.25 * 25.4;
 
 /** What fills the grid. */
 export type CaseContents =
@@ -88,6 +115,8 @@ export interface CaseLayout {
   inside: { x: [number, number]; y: [number, number]; z: [number, number] };
   grid: FrontGrid;
   dividerXs: number[];
+  /** Web frames between the rows, or null. */
+  webFrames: WebFrameLayout | null;
   drawers: DrawerBoxLayout[];
 }
 
@@ -154,6 +183,8 @@ export function caseLayout(plan: CasePlan): CaseLayout {
   const dividerXs = plan.contents.kind === 'drawers' && plan.columns > 1 ? grid.columnBoundariesX : [];
   if (frame && dividerXs.length > 0 && frame.mullionMm < t) fail('faceFrameMullion', `a ${r(frame.mullionMm)} mm mullion does not cover the ${r(t)} mm divider behind it`, `at least ${r(t)} mm`);
 
+  const webFrames = plan.contents.kind === 'drawers' ? webFrameLayout(plan, plan.contents.drawers, t, inside, grid, dividerXs, frame) : null;
+
   const drawers: DrawerBoxLayout[] = [];
   if (plan.contents.kind === 'drawers') {
     const d = plan.contents.drawers;
@@ -182,6 +213,39 @@ export function caseLayout(plan: CasePlan): CaseLayout {
   }
   return {
     plan, t, backThicknessMm: bt, baseHeightMm, ffT, frame,
-    carcassBox: { x, y, z }, inside, grid, dividerXs, drawers,
+    carcassBox: { x, y, z }, inside, grid, dividerXs, webFrames, drawers,
   };
+}
+
+/**
+ * Web frames behind the face frame's rails between rows: each band's top is level with the
+ * bottom of the opening above, so the drawer above rides on it; the frame is let into dadoes in
+ * the sides, and the dividers stop on it. None without a face frame or with one row.
+ */
+function webFrameLayout(plan: CasePlan, d: DrawerPlan, t: number, inside: CaseLayout['inside'], grid: FrontGrid, dividerXs: readonly number[], frame: FrameWidths | null): WebFrameLayout | null {
+  const w = d.webFrames;
+  if (!w || !frame || plan.rows < 2) return null;
+  const p = plan.p;
+  if (frame.midRailMm < SOLID_STOCK_MM - 1e-9) fail('faceFrameMidRail', `a ${r(frame.midRailMm)} mm rail between rows does not hide a ${r(SOLID_STOCK_MM)} mm web frame`, `at least ${r(SOLID_STOCK_MM)} mm, or no web frames`);
+  const bandsZ = grid.rows.slice(0, -1).map((row): [number, number] => [row[0] - SOLID_STOCK_MM, row[0]]);
+  const frontRailY: [number, number] = [inside.y[0], inside.y[0] + w.railDepthMm];
+  const backRailY: [number, number] = [inside.y[1] - w.railDepthMm, inside.y[1]];
+  if (backRailY[0] - frontRailY[1] < MIN_OPENING_MM) fail('webFrameRailDepth', `two ${r(w.railDepthMm)} mm rails leave no room for runners in a ${r(inside.y[1] - inside.y[0])} mm deep carcass`, `at most ${r((inside.y[1] - inside.y[0] - MIN_OPENING_MM) / 2)} mm`);
+  // Runners reach under the drawer sides when the drawers ride on them.
+  const under = SLIDE_RULES[d.slide].sideClearanceMm + d.sideThicknessMm;
+  const side = Math.max(w.runnerWidthMm, under);
+  const centre = Math.max(w.runnerWidthMm, t + 2 * under);
+  const runnersX: [number, number][] = [
+    [inside.x[0] - p.jointDepth, inside.x[0] + side],
+    ...dividerXs.map((xc): [number, number] => [xc - centre / 2, xc + centre / 2]),
+    [inside.x[1] - side, inside.x[1] + p.jointDepth],
+  ];
+  const leastTenon = 2 * WEB_FRAME_GROOVE_DEPTH_MM + 3;
+  if (w.runnerWidthMm < leastTenon) fail('runnerWidth', `a ${r(w.runnerWidthMm)} mm runner leaves no tenon between its shoulders`, `at least ${r(leastTenon)} mm`);
+  runnersX.slice(1).forEach((xr, i) => {
+    if (xr[0] - runnersX[i]![1] < MIN_OPENING_MM) fail('runnerWidth', `${r(w.runnerWidthMm)} mm runners leave less than ${r(MIN_OPENING_MM)} mm between them`, 'narrower runners, or wider columns');
+  });
+  const grooveWidthMm = w.dustPanelSheet ? getSheetGood(w.dustPanelSheet, 'dustPanelSheet').thicknessMm : OPEN_FRAME_GROOVE_MM;
+  if (grooveWidthMm > SOLID_STOCK_MM / 2) fail('dustPanelSheet', `a ${r(grooveWidthMm)} mm dust panel is too thick for a groove in ${r(SOLID_STOCK_MM)} mm web-frame stock`, `at most ${r(SOLID_STOCK_MM / 2)} mm thick`);
+  return { bandsZ, frontRailY, backRailY, runnersX, grooveWidthMm, dustPanelSheet: w.dustPanelSheet };
 }

@@ -33,6 +33,7 @@ export function dresserPlan(params: Readonly<Record<string, ParamValue>>, climat
         slide: p.slideType, sideThicknessMm: p.drawerSideThickness, joinery: p.drawerJoinery, bottomSheet: p.drawerBottomSheet,
         bottomGrooveDepthMm: p.drawerBottomGroove, bottomSetUpMm: p.drawerBottomSetUp, topClearanceMm: p.drawerTopClearance,
         bottomClearanceMm: p.drawerBottomClearance, depthMm: p.drawerDepth, rearClearanceMm: p.drawerRearClearance, species: p.drawerSpecies,
+        webFrames: p.webFrames === 'none' ? null : { dustPanelSheet: p.webFrames === 'dust-panel' ? p.dustPanelSheet : null, railDepthMm: p.webFrameRailDepth, runnerWidthMm: p.runnerWidth },
       },
     },
   };

@@ -25,12 +25,12 @@ import type { FeatureDraft } from '../geometry/featureDescribe.ts';
 import type { WallFrame } from '../geometry/wallFrame.ts';
 import type { Check, Material } from '../types.ts';
 import { drawerFitChecks, drawerTravelCheck } from '../checks/drawerFit.ts';
-import { frontClearanceChecks, revealChecks } from '../checks/fronts.ts';
+import { frontClearanceChecks, legAndRailRevealChecks, revealChecks } from '../checks/fronts.ts';
 import { railTongueCheck, stoppedGrooveCheck } from '../checks/joinery.ts';
 import { panelFloatCheck } from '../checks/panelFloat.ts';
 import { stockSizeChecks } from '../checks/stock.ts';
 import { tipOverCheck } from '../checks/tipOver.ts';
-import type { CaseBuild } from './caseBuild.ts';
+import { drawerStockGlueUp, type CaseBuild } from './caseBuild.ts';
 import { MIN_OPENING_MM, type DrawerPlan, type TopPlan } from './caseLayout.ts';
 import { roughSizer } from './chest.ts';
 import type { DresserParams } from './dresserParams.ts';
@@ -79,6 +79,38 @@ function wallFloat(p: P, climate: Climate, spanMm: number, count: number, openin
   return { across, groove, float: panelFloat({ panelWidthMm: across, material: solid ? p.species : p.panelSheet, sawn: 'unknown', grooveDepthMm: groove, climate }) };
 }
 
+/**
+ * How far overlay fronts lap the rails between rows and the mullions (mm). They lap the legs and
+ * the top and bottom web frames by the overlay; the rails between rows are only a stock
+ * thickness tall, so where two overlays do not fit on one, each front laps it by half of what
+ * leaves it showing as much as the top and bottom rails show (never less than the gap between
+ * fronts), and the mullions likewise as much as the legs: neighbours meet without overlapping
+ * and the reveals stay even.
+ */
+export function framedOverlayLaps(p: Pick<P, 'overlay' | 'frontGap'>, frame: FrameWidths): { railMm: number; mullionMm: number } {
+  const shows = (outerMm: number) => Math.max(p.frontGap, outerMm - p.overlay);
+  return {
+    railMm: Math.min(p.overlay, (frame.midRailMm - shows(Math.min(frame.topRailMm, frame.bottomRailMm))) / 2),
+    mullionMm: Math.min(p.overlay, (frame.mullionMm - shows(frame.stileMm)) / 2),
+  };
+}
+
+function meetOverRails(grid: FrontGrid, p: P, frame: FrameWidths): FrontGrid {
+  if (p.frontMount !== 'overlay') return grid;
+  const lap = framedOverlayLaps(p, frame);
+  const lastRow = grid.rows.length - 1;
+  const lastCol = grid.columns.length - 1;
+  const cells = grid.cells.map((cell) => ({
+    ...cell,
+    fronts: cell.fronts.map((f) => ({
+      ...f,
+      x: [cell.col === 0 ? f.x[0] : cell.x[0] - lap.mullionMm, cell.col === lastCol ? f.x[1] : cell.x[1] + lap.mullionMm] as [number, number],
+      z: [cell.row === lastRow ? f.z[0] : cell.z[0] - lap.railMm, cell.row === 0 ? f.z[1] : cell.z[1] + lap.railMm] as [number, number],
+    })),
+  }));
+  return { ...grid, cells };
+}
+
 /** Works out the layout, or throws an InputError naming the parameter and the limit. */
 export function framedLayout(p: P, top: TopPlan, drawers: DrawerPlan, rows: number, columns: number, rowHeights: (a: number) => number[], rowField: string, climate: Climate): FramedLayout {
   const L = p.legSize;
@@ -123,7 +155,7 @@ export function framedLayout(p: P, top: TopPlan, drawers: DrawerPlan, rows: numb
   });
   const colW = (p.width - 2 * L - (columns - 1) * p.faceFrameMullion) / columns;
   if (colW < 2 * MIN_OPENING_MM) fail('drawerColumns', `${columns} columns leave openings only ${r(colW)} mm wide`, `openings at least ${r(2 * MIN_OPENING_MM)} mm wide`);
-  const grid = frontGrid({ x: [0, p.width], z, frame, rowHeightsMm: heights, columns, leaves: 1, mount: p.frontMount, revealMm: p.reveal, overlayMm: p.overlay, gapMm: p.frontGap, frontThicknessMm: p.frontThickness });
+  const grid = meetOverRails(frontGrid({ x: [0, p.width], z, frame, rowHeightsMm: heights, columns, leaves: 1, mount: p.frontMount, revealMm: p.reveal, overlayMm: p.overlay, gapMm: p.frontGap, frontThicknessMm: p.frontThickness }), p, frame);
   const bands: [number, number][] = [[legLengthMm - T, legLengthMm], ...grid.rows.map((row) => [row[0] - T, row[0]] as [number, number])];
 
   const c = SLIDE_RULES['wood-runners'].sideClearanceMm;
@@ -185,8 +217,9 @@ export function buildFramedDresser(p: P, top: TopPlan, d: DrawerPlan, rows: numb
   // Web frames, the top one drilled and slotted for the top's screws.
   const fixedLineY = p.webFrameRailDepth / 2;
   const frames = lay.bands.map((band, i) => webFrame({
-    index: i, z: band, x: [L, p.width - L], frontRailY: [0, p.webFrameRailDepth], backRailY: lay.backRailY, backLegY: [p.depth - L, p.depth],
-    runnersX: lay.runnersX, material: solid, grooveWidthMm: p.grooveWidth, mortiseDepthMm: p.legGrooveDepth, railTongueLengthMm: p.railTongueLength,
+    index: i, z: band, x: [L, p.width - L], frontRailY: [0, p.webFrameRailDepth], backRailY: lay.backRailY,
+    ends: { kind: 'tenon', mortiseDepthMm: p.legGrooveDepth, railTongueLengthMm: p.railTongueLength, backLegY: [p.depth - L, p.depth] },
+    runnersX: lay.runnersX, material: solid, grooveWidthMm: p.grooveWidth,
     grooveDepthMm: p.frameGrooveDepth, tongueClearanceMm: p.tongueClearance, shoulderMm: SHOULDER_MM, explodeMm: explodeMm * 0.5,
     ...(i === 0 ? { railFeatures: (which: 'front' | 'back', world) => stretcherFasteners(which, world, { fixedLineYMm: fixedLineY, screwDiameterMm: p.screwDiameter, species: top.material === 'solid' ? species.id : null, climate }) } : {}),
   }));
@@ -239,7 +272,12 @@ export function buildFramedDresser(p: P, top: TopPlan, d: DrawerPlan, rows: numb
   drafts.push(...topBuilt.drafts);
   joints.push(...topBuilt.joints);
 
-  // Drawers on the web frames.
+  // Drawers on the web frames; fronts wider than the widest board are glued up, as on the carcass dresser.
+  const glueUpFor = (widthMm: number) => {
+    if (widthMm <= p.maxBoardWidth) return {};
+    const widths = glueUpBoardWidthsMm({ panelWidthMm: widthMm, maxBoardWidthMm: p.maxBoardWidth, arrangement: 'equal' });
+    return { glueUp: { boards: widths.length, boardWidthMm: widths[0]! } };
+  };
   const dSpecies = getSpecies(d.species);
   const stock: Material = { kind: 'solid', speciesId: dSpecies.id, speciesName: dSpecies.name };
   const bottomSheet = getSheetGood(d.bottomSheet, 'drawerBottomSheet');
@@ -251,13 +289,13 @@ export function buildFramedDresser(p: P, top: TopPlan, d: DrawerPlan, rows: numb
     const front = plainPart({
       group: 'drawer/face', member: `row-${dl.row + 1}`, label: `drawer front, ${where}`, role: 'drawer-front', material: solid, grain: 'length',
       world: boxBetween([fb.x[0], fb.y[0], fb.z[0]], [fb.x[1], fb.y[1], fb.z[1]]), axes: { length: '+X', width: '+Z', thickness: '-Y' },
-      explodeMm: [0, -explodeMm, 0], name: drawerNamer('drawer-front', 'Drawer front'), notes: ['Screwed to the box from inside.'],
+      explodeMm: [0, -explodeMm, 0], name: drawerNamer('drawer-front', 'Drawer front'), notes: ['Screwed to the box from inside.'], ...glueUpFor(fb.z[1] - fb.z[0]),
       grainMatch: frontGrainMatch(fb, columns),
     });
     const box = drawerBox({
       box: boxBetween([dl.box.x[0], dl.box.y[0], dl.box.z[0]], [dl.box.x[1], dl.box.y[1], dl.box.z[1]]), row: dl.row + 1, where, stock,
       sideThicknessMm: d.sideThicknessMm, endThicknessMm: d.sideThicknessMm, joinery: d.joinery, bottom: { sheet: sheet(d.bottomSheet), thicknessMm: bottomSheet.thicknessMm },
-      bottomGrooveDepthMm: d.bottomGrooveDepthMm, bottomSetUpMm: d.bottomSetUpMm, bottomClearanceMm: 25.4 / 32, explodeMm: explodeMm * 0.4,
+      bottomGrooveDepthMm: d.bottomGrooveDepthMm, bottomSetUpMm: d.bottomSetUpMm, bottomClearanceMm: 25.4 / 32, glueUpFor: drawerStockGlueUp(p), explodeMm: explodeMm * 0.4,
     });
     drafts.push(front, ...box.drafts);
     joints.push(...box.joints, { type: 'front-screwed', a: { draft: front, featureIds: [] }, b: { draft: box.front, featureIds: [] }, clearanceMm: 0, glued: false, floating: false, note: 'Screwed from inside the box.' });
@@ -282,7 +320,9 @@ export function buildFramedDresser(p: P, top: TopPlan, d: DrawerPlan, rows: numb
       boxHeightMm: f.dl.box.z[1] - f.dl.box.z[0], availableDepthMm: f.dl.availableDepthMm, boxDepthMm: f.dl.box.y[1] - f.dl.box.y[0], slide: 'wood-runners', rule: SLIDE_RULES['wood-runners'],
     })),
     ...drawerTravelCheck(fitFacts.map((f) => ({ partIds: idsOf(f.drafts), boxDepthMm: f.dl.box.y[1] - f.dl.box.y[0] })), 'wood-runners'),
-    ...revealChecks(idsOf(fronts.map((f) => f.draft)), lay.frame, p.frontMount, p.reveal, p.overlay, rows, columns),
+    ...(p.frontMount === 'inset'
+      ? revealChecks(idsOf(fronts.map((f) => f.draft)), lay.frame, p.frontMount, p.reveal, p.overlay, rows, columns)
+      : legAndRailRevealChecks(idsOf(fronts.map((f) => f.draft)), lay.frame, p.overlay, p.frontGap, framedOverlayLaps(p, lay.frame), rows, columns)),
     ...frontClearanceChecks(fronts.map((f) => ({ ...f.facts, partIds: idsOf([f.draft]) }))),
     ...stockSizeChecks(assembled.parts, p.maxBoardLength, p.maxBoardWidth),
     tipOverCheck(idsOf([...renamed.values()]), 'dresser', p.height, p.depth),

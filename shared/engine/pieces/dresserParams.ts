@@ -20,6 +20,7 @@ const rowHeights: ParamDef[] = Array.from({ length: MAX_DRAWER_ROWS }, (_, i) =>
 }));
 
 const FRAMED = 'Frame-and-panel case';
+const WEB_FRAMES = 'Web frames';
 /** Shown only for a dresser built like the chest; the carcass-only settings only for a carcass. */
 const FRAMED_CASE = { param: 'caseConstruction', is: ['frame-and-panel'] } as const;
 const CARCASS_CASE = { param: 'caseConstruction', is: ['carcass'] } as const;
@@ -64,8 +65,10 @@ export const DRESSER_PARAMS: readonly ParamDef[] = [
   { key: 'stretcherWidth', label: 'Stretcher width', group: GROUPS.top, kind: 'length', default: 3 * IN, min: 40, max: 200, help: 'Front and back stretchers the top is screwed to.' },
 
   ...framedParams,
-  { key: 'webFrameRailDepth', label: 'Web-frame rail depth', group: FRAMED, kind: 'length', default: 3 * IN, min: 25, max: 200, help: 'Front to back size of the web frames\' front and back rails; deeper than the legs.', shownWhen: [FRAMED_CASE] },
-  { key: 'runnerWidth', label: 'Side runner width', group: FRAMED, kind: 'length', default: 1.5 * IN, min: 15, max: 100, shownWhen: [FRAMED_CASE] },
+  { key: 'webFrames', label: 'Web frames between rows', group: WEB_FRAMES, kind: 'enum', default: 'dust-panel', options: [{ value: 'dust-panel', label: 'Web frames with dust panels' }, { value: 'open', label: 'Open web frames' }, { value: 'none', label: 'None (drawers hang on their slides)' }], help: 'Behind each face-frame rail between rows, let into dadoes in the sides; a frameless carcass has none. A frame-and-panel case always has them, without dust panels.', shownWhen: [CARCASS_CASE, { param: 'faceFrame', is: [true] }] },
+  { key: 'dustPanelSheet', label: 'Dust panel sheet', group: WEB_FRAMES, kind: 'sheet', default: 'hardwood-plywood-1/4', options: sheetChoice(), help: 'Floats in grooves cut to its thickness.', shownWhen: [CARCASS_CASE, { param: 'faceFrame', is: [true] }, { param: 'webFrames', is: ['dust-panel'] }] },
+  { key: 'webFrameRailDepth', label: 'Web-frame rail depth', group: WEB_FRAMES, kind: 'length', default: 3 * IN, min: 25, max: 200, help: 'Front to back size of the web frames\' front and back rails; in a frame-and-panel case, deeper than the legs.' },
+  { key: 'runnerWidth', label: 'Side runner width', group: WEB_FRAMES, kind: 'length', default: 1.5 * IN, min: 15, max: 100, help: 'Widened where needed to reach under the drawer sides; the runners under the dividers are wider still.' },
 
   ...CARCASS_PARAMS,
   ...FACE_FRAME_PARAMS,
@@ -83,6 +86,7 @@ export interface DresserParams extends CaseParams {
   drawerSideThickness: number; drawerSpecies: CaseParams['species']; drawerBottomSheet: CaseParams['backSheet'];
   drawerBottomGroove: number; drawerBottomSetUp: number; drawerTopClearance: number; drawerBottomClearance: number; drawerDepth: number; drawerRearClearance: number;
   drawerGraduation: 'equal' | 'arithmetic' | 'geometric' | 'listed'; graduationStep: number; graduationRatio: number;
+  webFrames: 'dust-panel' | 'open' | 'none'; dustPanelSheet: CaseParams['backSheet']; webFrameRailDepth: number; runnerWidth: number;
   topMaterial: 'solid' | 'sheet'; topThickness: number; topOverhangFront: number; topOverhangSide: number; topOverhangBack: number; topBoardWidth: number; stretcherWidth: number;
   [rowHeight: `rowHeight${number}`]: number;
 }

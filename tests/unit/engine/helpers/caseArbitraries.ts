@@ -34,6 +34,7 @@ export const sensibleDresserSpec: fc.Arbitrary<PieceSpec> = fc.record({
   drawerGraduation: fc.constantFrom('equal', 'arithmetic', 'geometric'), graduationStep: len(0, 30), graduationRatio: len(1, 1.2),
   topMaterial: fc.constantFrom('solid', 'sheet'), topThickness: len(18, 30), topOverhangFront: len(0, 40), topOverhangSide: len(0, 40), topOverhangBack: len(0, 20),
   stretcherWidth: len(50, 100), ...caseCommon, climate,
+  webFrames: fc.constantFrom('dust-panel', 'open', 'none'), dustPanelSheet: fc.constantFrom('hardwood-plywood-1/4', 'mdf-1/4'), webFrameRailDepth: len(50, 100), runnerWidth: len(25, 60),
   caseConstruction: fc.constantFrom('carcass', 'frame-and-panel'), legSize: len(38, 64), footHeight: len(40, 150),
   panelMaterial: fc.constantFrom('plywood', 'solid'), panelGrain: fc.constantFrom('horizontal', 'vertical'), sideStileCount: fc.integer({ min: 0, max: 1 }),
 }).map(({ climate: c, ...params }) => ({

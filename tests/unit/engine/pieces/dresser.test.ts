@@ -31,7 +31,7 @@ describe('buildPiece (dresser), worked by hand', () => {
 
   it('shares the carcass height among the rows, each row 1 in taller than the one above', () => {
     // Carcass: 34 − 4 plinth − 7/8 top = 29-1/8 in = 739.775 mm.
-    within(part(r, 'case-side').lengthMm, 739.775);
+    within(part(r, 'left-side').lengthMm, 739.775);
     // Rows share 739.775 − 2 × 38.1 − 2 × 50.8 = 561.975 mm; h0 = (561.975 − 3 × 25.4) / 3 = 161.925.
     // Mullions fill each row's opening: 161.925, 187.325, 212.725 mm.
     const mullions = r.parts.filter((p) => p.id.startsWith('row-') && p.id.endsWith('face-frame-mullion')).map((p) => p.lengthMm).sort((a, b) => a - b);
@@ -124,6 +124,110 @@ describe('buildPiece (dresser), worked by hand', () => {
   });
 });
 
+describe('buildPiece (dresser), web frames worked by hand', () => {
+  // The default dresser's web frames: 3/4 in stock behind each 2 in face-frame rail between rows,
+  // top flush with the opening above; 3 in rails, 1-1/2 in side runners, 1/4 in grooves 1/4 in
+  // deep, tenons and panel edges 1/16 in short of the groove bottoms (common practice, no
+  // published source); 1/4 in plywood dust panels (7/32 in = 5.556 mm actual); the frame let
+  // 1/4 in into a dado across each side.
+  const r = dresser();
+
+  it('runs the rails from dado to dado, the front rail behind the face frame and the back rail against the back', () => {
+    // Inside the sides: 1422.4 − 2 × 18.256 = 1385.888; plus two 6.35 dadoes = 1398.588 mm.
+    const front = part(r, 'web-frame-front-rail');
+    within(front.lengthMm, 1398.588);
+    within(front.widthMm, 3 * IN);
+    within(front.thicknessMm, 0.75 * IN);
+    expect(front.quantity).toBe(2);
+    expect(part(r, 'web-frame-back-rail').quantity).toBe(2);
+  });
+
+  it('sets each frame under the opening above it, in dadoes at those heights in both sides', () => {
+    // Carcass from the 4 in plinth (101.6) up; openings start under the 1-1/2 in top rail at
+    // 841.375 − 38.1 = 803.275: row 1 bottom 803.275 − 161.925 = 641.35, so frame 1 is
+    // 622.3–641.35; row 2 bottom 641.35 − 50.8 − 187.325 = 403.225, frame 2 384.175–403.225.
+    for (const id of ['left-side', 'right-side']) {
+      const dadoes = part(r, id).features.filter((f) => f.id.startsWith('dado-web-frame'));
+      expect(dadoes).toHaveLength(2);
+      expect(dadoes.every((f) => f.type === 'dado' && Math.abs(f.widthMm - 0.75 * IN) < MM_TOLERANCE && Math.abs(f.depthMm - 0.25 * IN) < MM_TOLERANCE)).toBe(true);
+    }
+    const frontRails = r.placements.filter((pl) => pl.partId === 'web-frame-front-rail').map((pl) => pl.positionMm[2]).sort((a, b) => a - b);
+    within(frontRails[0], 384.175);
+    within(frontRails[1], 622.3);
+  });
+
+  it('tenons the runners into the rails and floats a dust panel in each bay', () => {
+    // Runners: from 95.25 − 6.35 + 1.5875 to 426.244 + 6.35 − 1.5875 (back rail from the back's
+    // front face 502.444 less 76.2) = 340.519 mm; a side runner 38.1 + 6.35 in its dado = 44.45 wide.
+    const runners = r.parts.filter((p) => p.id.startsWith('web-frame-runner'));
+    expect(runners.reduce((n, p) => n + p.quantity, 0)).toBe(6);
+    runners.forEach((p) => within(p.lengthMm, 340.519));
+    expect(runners.some((p) => Math.abs(p.widthMm - 44.45) < MM_TOLERANCE)).toBe(true);
+    // The runner under the divider reaches under both drawers' sides: 18.256 + 2 × (12.7 + 12.7) = 69.056.
+    expect(runners.some((p) => Math.abs(p.widthMm - 69.056) < MM_TOLERANCE)).toBe(true);
+    // Panel: bay 56.356–676.672 (the centre runner at 711.2 ± 34.528), plus 2 × (6.35 − 1.5875) = 629.841 by 340.519.
+    const panel = part(r, 'dust-panel');
+    expect(panel.quantity).toBe(4);
+    within(panel.lengthMm, 629.841);
+    within(panel.widthMm, 340.519);
+    within(panel.thicknessMm, (7 / 32) * IN);
+    expect(r.joints.filter((j) => j.type === 'panel-in-groove' && j.members[0].partId === 'dust-panel').every((j) => j.floating && !j.glued)).toBe(true);
+  });
+
+  it('stops the divider on each frame: one piece per row, screwed through the runner under it', () => {
+    // Top piece from frame 1's top (641.35) into the stretchers' dado (841.375 − 12.7 − 18.256 + 6.35
+    // = 816.769): 175.419; row 2 from 403.225 to 622.3: 219.075; row 3 from the bottom's dado
+    // (101.6 + 12.7 + 18.256 − 6.35 = 126.206) to 384.175: 257.969.
+    within(part(r, 'row-1-divider').lengthMm, 175.419);
+    within(part(r, 'row-2-divider').lengthMm, 219.075);
+    within(part(r, 'row-3-divider').lengthMm, 257.969);
+    expect(r.joints.filter((j) => j.type === 'butt-screwed' && j.members[0].partId.endsWith('-divider')).reduce((n, j) => n + j.count, 0)).toBe(4);
+  });
+
+  it('glues each web frame flat, then into the sides with the carcass', () => {
+    const flat = r.derived.glueUp.find((s) => s.steps.some((st) => st.title.startsWith('Glue up each web frame')));
+    expect(flat?.floatingPartIds).toContain('dust-panel');
+    const carcass = r.derived.glueUp.find((s) => s.title === 'The carcass');
+    expect(carcass?.steps[0]!.partIds).toContain('web-frame-front-rail');
+  });
+});
+
+describe('buildPiece (dresser) web-frame options', () => {
+  it('builds open frames without dust panels, and none at all when asked', () => {
+    const open = dresser({ webFrames: 'open' });
+    expect(open.parts.some((p) => p.id === 'dust-panel')).toBe(false);
+    expect(open.parts.some((p) => p.id === 'web-frame-front-rail')).toBe(true);
+    const none = dresser({ webFrames: 'none' });
+    expect(none.parts.some((p) => p.id.startsWith('web-frame'))).toBe(false);
+    // Without frames the divider runs bottom to top in one piece: 816.769 − 126.206 = 690.563 mm.
+    within(part(none, 'divider').lengthMm, 690.563);
+    expect(none.parts.some((p) => p.id === 'case-side')).toBe(true);
+  });
+
+  it('rides the drawers over a web frame on its runners', () => {
+    const r = dresser({ slideType: 'wood-runners' });
+    const rides = r.joints.filter((j) => j.type === 'drawer-slide' && j.members[0].partId === 'row-1-drawer-side');
+    expect(rides.length).toBeGreaterThan(0);
+    expect(rides.every((j) => j.members[1].partId.startsWith('web-frame-runner'))).toBe(true);
+    expect(r.checks.filter((c) => c.severity === 'error' || c.severity === 'warning')).toEqual([]);
+  });
+
+  it('builds no web frames in a frameless carcass', () => {
+    expect(dresser({ faceFrame: false }).parts.some((p) => p.id.startsWith('web-frame'))).toBe(false);
+  });
+
+  it('refuses a rail between rows too narrow to hide a web frame, naming faceFrameMidRail', () => {
+    try {
+      dresser({ faceFrameMidRail: 15 });
+      expect.unreachable();
+    } catch (error) {
+      expect(isInputError(error)).toBe(true);
+      expect((error as { field: string }).field).toBe('faceFrameMidRail');
+    }
+    expect(dresser({ faceFrameMidRail: 15, webFrames: 'none' }).parts.length).toBeGreaterThan(0);
+  });
+});
+
 describe('buildPiece (dresser) options', () => {
   it('makes inset fronts the opening less the reveal all round', () => {
     // 647.7 − 2 × 1.5875 = 644.525 mm
@@ -150,6 +254,15 @@ describe('buildPiece (dresser) options', () => {
     expect(r.parts.some((p) => p.role === 'runner')).toBe(true);
     // 1/32 in each side: 647.7 − 1.5875 = 646.1125 mm box, so the front is 646.1125 − 25.4 + 12.7.
     within(part(r, 'row-1-drawer-box-front').lengthMm, 646.1125 - 12.7);
+  });
+
+  it('flags overlay fronts that overlap across a rail narrower than two overlays, with the overlap', () => {
+    // A 3/4 in rail between rows under 1/2 in overlays: 19.05 − 2 × 12.7 = −6.35 mm.
+    const r = dresser({ faceFrameMidRail: 0.75 * IN });
+    const c = r.checks.find((x) => x.id.startsWith('fronts-collide'));
+    expect(c?.severity).toBe('error');
+    within(c?.numbers.gapMm, -6.35);
+    expect(dresser().checks.some((x) => x.id.startsWith('fronts-collide'))).toBe(false);
   });
 
   it('warns that uneven rails show uneven reveals around overlay fronts, and says which widths even them', () => {
@@ -235,6 +348,37 @@ describe('buildPiece (dresser) built like the chest', () => {
     const first = r.derived.glueUp[0]!;
     expect(first.title).toMatch(/sides on their legs/);
     expect(first.floatingPartIds).toContain('side-panel');
+  });
+
+  it('builds its defaults clean: no error or warning, no caution but the tip-over one', () => {
+    const d = dresser({ caseConstruction: 'frame-and-panel', slideType: 'wood-runners' });
+    expect(d.checks.filter((c) => c.severity === 'error' || c.severity === 'warning')).toEqual([]);
+    expect(d.checks.filter((c) => c.severity === 'caution').map((c) => c.id)).toEqual(['tip-over']);
+  });
+
+  it('meets overlay fronts over the rails between rows, the reveals even: worked by hand', () => {
+    // Default 1/2 in overlay on 3/4 in rails: the top and bottom rails show 19.05 − 12.7 = 6.35;
+    // between rows each front laps (19.05 − 6.35) / 2 = 6.35, so that rail shows 6.35 too. The
+    // legs show 44.45 − 12.7 = 31.75; the 2 in mullion is lapped (50.8 − 31.75) / 2 = 9.525 a side.
+    const d = dresser({ caseConstruction: 'frame-and-panel', slideType: 'wood-runners' });
+    // Rows 204.258, 229.658, 255.058 (see above): fronts 204.258 + 12.7 + 6.35 = 223.308,
+    // 229.658 + 2 × 6.35 = 242.358, 255.058 + 6.35 + 12.7 = 274.108 tall.
+    within(part(d, 'row-1-drawer-front').widthMm, 223.308);
+    within(part(d, 'row-2-drawer-front').widthMm, 242.358);
+    within(part(d, 'row-3-drawer-front').widthMm, 274.108);
+    // Columns (1422.4 − 2 × 44.45 − 50.8) / 2 = 641.35 wide: front 641.35 + 12.7 + 9.525 = 663.575.
+    within(part(d, 'row-1-drawer-front').lengthMm, 663.575);
+    expect(d.checks.some((c) => c.id.startsWith('fronts-collide') || c.id === 'reveals-uneven')).toBe(false);
+  });
+
+  it('never overlaps fronts however large the overlay, but says when the reveals come out uneven', () => {
+    const d = dresser({ caseConstruction: 'frame-and-panel', slideType: 'wood-runners', overlay: 0.75 * IN });
+    expect(d.checks.some((c) => c.id.startsWith('fronts-collide'))).toBe(false);
+    const c = d.checks.find((x) => x.id === 'reveals-uneven');
+    expect(c?.severity).toBe('warning');
+    // Top rail covered (19.05 − 19.05 = 0); between rows the fronts keep the 1/8 in gap.
+    within(c?.numbers.topRailShowsMm, 0);
+    within(c?.numbers.midRailShowsMm, 3.175);
   });
 
   it('refuses slides other than wooden runners, naming slideType', () => {
