@@ -2,7 +2,8 @@
  * One board being filled. The saw first crosscuts the board into lengths (sections), then rips
  * each length into parts side by side, the usual order at the mill: the longest part of a
  * section sets its length. Defects are cut around: no part may cover one, and a kerf is left
- * between a part and a defect. The class mutates itself (`tryPlace`); `clone` copies it for
+ * between a part and a defect. A grain-matched run takes consecutive lengths in its order. The
+ * class mutates itself (`tryPlace`); `clone` copies it for
  * look-ahead.
  */
 import type { BoardItem } from './boardInput.ts';
@@ -27,6 +28,31 @@ interface Region {
   x1: number;
   y0: number;
   y1: number;
+}
+
+/** The parts of a run at one order: one crosscut length, ripped side by side; mm. */
+export interface RunSlot {
+  items: BoardItem[];
+  /** The longest part's length, and the parts' widths with a kerf between each two. */
+  length: number;
+  width: number;
+}
+
+/** Splits a run sorted by order into its slots, one per order. */
+export function runSlots(run: readonly BoardItem[], kerf: number): RunSlot[] {
+  const slots: RunSlot[] = [];
+  let last: RunSlot | undefined;
+  for (const item of run) {
+    if (last && last.items[0]!.order === item.order) {
+      last.items.push(item);
+      last.length = Math.max(last.length, item.lengthMm);
+      last.width += kerf + item.widthMm;
+    } else {
+      last = { items: [item], length: item.lengthMm, width: item.widthMm };
+      slots.push(last);
+    }
+  }
+  return slots;
 }
 
 /** A board's sections and placed items; sizes in mm. */
@@ -84,6 +110,39 @@ export class BoardFill {
     return false;
   }
 
+  /**
+   * Places `run` (sorted by order) on fresh length of the board: one crosscut length per order,
+   * end to end with a kerf between, parts of one order ripped side by side in it (the boards of a
+   * glued-up front), all from one edge line; or nothing. False if it will not go.
+   */
+  tryPlaceRun(run: readonly BoardItem[]): boolean {
+    const slots = runSlots(run, this.kerf);
+    let total = -this.kerf;
+    for (const slot of slots) total += slot.length + this.kerf;
+    for (let x = this.cursor; x + total <= this.stock.lengthMm; ) {
+      const y = this.runY(slots, x);
+      if (y !== null) {
+        let at = x;
+        for (const slot of slots) {
+          const section = { x: at, length: slot.length, usedWidth: 0 };
+          this.sections.push(section);
+          let across = y;
+          for (const item of slot.items) {
+            this.put(item, section, across);
+            across += item.widthMm + this.kerf;
+          }
+          at += slot.length + this.kerf;
+        }
+        this.cursor = at;
+        return true;
+      }
+      const blocking = this.defects.filter((d) => d.x0 < x + total && d.x1 > x).sort((a, b) => a.x1 - b.x1)[0];
+      if (!blocking) return false;
+      x = blocking.x1 + this.kerf;
+    }
+    return false;
+  }
+
   /** Where the saw crosscuts the board, mm from its end: after each section but the last. */
   crosscuts(): number[] {
     return this.sections
@@ -102,6 +161,26 @@ export class BoardFill {
   private put(item: BoardItem, section: Section, y: number): void {
     section.usedWidth = y + item.widthMm + this.kerf;
     this.spots.push({ item, x: section.x, y });
+  }
+
+  // The lowest edge line where every slot of a run, end to end from `x`, misses every defect.
+  private runY(slots: readonly RunSlot[], x: number): number | null {
+    let y = 0;
+    for (let moved = true; moved; ) {
+      moved = false;
+      let at = x;
+      for (const slot of slots) {
+        const clear = this.clearY(at, slot.length, y, slot.width);
+        if (clear === null) return null;
+        if (clear > y) {
+          y = clear;
+          moved = true;
+          break;
+        }
+        at += slot.length + this.kerf;
+      }
+    }
+    return y;
   }
 
   // The lowest y ≥ `from` where a `length` × `width` part at `x` misses every defect and stays on the board.

@@ -3,7 +3,7 @@
  */
 import { InputError } from '../errors.ts';
 import { MM_PER_INCH } from '../units/length.ts';
-import type { BoardLayoutOptions, BoardPartInput, BoardStock, MillingAllowance } from './boardTypes.ts';
+import type { BoardLayoutOptions, BoardPartInput, BoardStock, GrainRun, MillingAllowance } from './boardTypes.ts';
 import { DEFAULT_KERF_MM, MAX_QUANTITY, checkAllowance, checkCount, checkSize } from './sheetInput.ts';
 
 /**
@@ -45,6 +45,10 @@ export interface BoardItem {
   finished: readonly [number, number, number];
   /** The match group with the instance folded in where the part asks for one group per instance. */
   group: string | null;
+  /** Place in a grain-matched run (cut end to end in this order); null for an unordered group or none. */
+  order: number | null;
+  /** The run in the maker's words; null when not in a run. */
+  label: string | null;
 }
 
 /** Merges `options` over the defaults and checks them. */
@@ -87,10 +91,34 @@ export function expandBoardParts(parts: readonly BoardPartInput[], allowance: Mi
     const quantity = checkCount(part.quantity, `${at}.quantity`, 0, MAX_QUANTITY);
     const lengthMm = part.roughLengthMm === undefined ? finished[0] + allowance.lengthMm : checkSize(part.roughLengthMm, `${at}.roughLengthMm`);
     const widthMm = part.roughWidthMm === undefined ? finished[1] + allowance.widthMm : checkSize(part.roughWidthMm, `${at}.roughWidthMm`);
+    const first = part.firstInstance === undefined ? 0 : checkCount(part.firstInstance, `${at}.firstInstance`, 0, MAX_QUANTITY);
+    const run = checkRun(part, at);
+    const group = run ? run.group : part.matchGroup === undefined || part.matchGroup === '' ? null : part.matchGroup;
     for (let instance = 0; instance < quantity; instance++) {
-      const group = part.matchGroup === undefined || part.matchGroup === '' ? null : part.matchGroup;
-      items.push({ index: items.length, partId: part.id, name: part.name, instance, lengthMm, widthMm, finished, group });
+      items.push({ index: items.length, partId: part.id, name: part.name, instance: first + instance, lengthMm, widthMm, finished, group, order: run ? run.order : null, label: run ? (run.note ?? run.group) : null });
     }
   });
+  checkGroupKinds(items);
   return items;
+}
+
+function checkRun(part: BoardPartInput, at: string): GrainRun | null {
+  const run = part.grainMatch;
+  if (run === undefined) return null;
+  if (part.matchGroup !== undefined && part.matchGroup !== '') throw new InputError(`${at}.grainMatch`, 'a part takes matchGroup or grainMatch, not both', 'one of the two');
+  if (typeof run.group !== 'string' || run.group === '') throw new InputError(`${at}.grainMatch.group`, 'must be a non-empty id', 'non-empty');
+  if (!Number.isFinite(run.order)) throw new InputError(`${at}.grainMatch.order`, 'must be a finite number', 'finite');
+  return run;
+}
+
+// A group is either a run (every part ordered) or a set kept on one board (none ordered).
+function checkGroupKinds(items: readonly BoardItem[]): void {
+  const ordered = new Map<string, boolean>();
+  for (const item of items) {
+    if (item.group === null) continue;
+    const isRun = item.order !== null;
+    const seen = ordered.get(item.group);
+    if (seen !== undefined && seen !== isRun) throw new InputError(`parts (${item.partId})`, `group ${item.group} mixes grainMatch runs and matchGroup parts`, 'one kind per group');
+    ordered.set(item.group, isRun);
+  }
 }

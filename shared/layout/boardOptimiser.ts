@@ -1,15 +1,15 @@
 /**
  * The board optimiser: assigns solid parts, at their rough size, to boards in stock and boards
- * to buy, keeping grain-match groups on one board, cutting around defects, and choosing the
+ * to buy, keeping grain-match groups on one board (runs end to end in their order), cutting around defects, and choosing the
  * ordering that buys the fewest board feet. Pure and deterministic.
  */
 import { boardFeet } from '../engine/derived/boardFeet.ts';
 import { formatLength } from '../units/format.ts';
 import { MM_PER_INCH } from '../units/length.ts';
-import { BoardFill } from './boardFill.ts';
+import { BoardFill, runSlots } from './boardFill.ts';
 import { boardSettings, expandBoardParts, type BoardItem } from './boardInput.ts';
 import { packBoards, placeUnit, type BoardAttempt, type BoardUnit } from './boardPacking.ts';
-import type { BoardLayout, BoardLayoutOptions, BoardPartInput, BoardPlan, BoardStock } from './boardTypes.ts';
+import type { BoardLayout, BoardLayoutOptions, BoardPartInput, BoardPlan, BoardStock, SplitGroupWarning } from './boardTypes.ts';
 import { runLayoutSteps, type LayoutControl, type LayoutSteps } from './control.ts';
 import { seededRandom, shuffled } from './prng.ts';
 import { betterScore } from './sheetPlan.ts';
@@ -39,13 +39,25 @@ export function* boardLayoutSteps(parts: readonly BoardPartInput[], options: Boa
     else groups.set(item.group, [...(groups.get(item.group) ?? []), item]);
   }
   const splitGroups: string[] = [];
+  const splitWarnings: SplitGroupWarning[] = [];
   const groupUnits: BoardUnit[] = [];
+  const runOrder = new Map<BoardItem, number>();
   for (const [id, members] of groups) {
-    const unit = members.slice().sort((a, b) => b.lengthMm - a.lengthMm || b.widthMm - a.widthMm);
+    const isRun = members[0]!.order !== null;
+    const unit = isRun
+      ? members.slice().sort((a, b) => a.order! - b.order! || a.index - b.index)
+      : members.slice().sort((a, b) => b.lengthMm - a.lengthMm || b.widthMm - a.widthMm);
+    if (isRun) runSlots(unit, kerfMm).forEach((slot, i) => slot.items.forEach((item) => runOrder.set(item, i + 1)));
     if (fitsAlone(unit)) groupUnits.push(unit);
     else {
       splitGroups.push(id);
-      singles.push(...unit.map((item) => [item]));
+      splitWarnings.push(splitWarning(id, unit, stock, kerfMm));
+      // A split run still keeps the boards of each glued-up part on one length where it can.
+      const pieces: BoardUnit[] = isRun ? runSlots(unit, kerfMm).map((slot) => slot.items) : unit.map((item) => [item]);
+      for (const piece of pieces) {
+        if (piece.length > 1 && fitsAlone(piece)) groupUnits.push(piece);
+        else singles.push(...piece.map((item) => [item]));
+      }
     }
   }
 
@@ -69,13 +81,14 @@ export function* boardLayoutSteps(parts: readonly BoardPartInput[], options: Boa
     }
   }
 
-  const boards = best.boards.map((b) => boardPlanOf(b, quarters));
+  const boards = best.boards.map((b) => boardPlanOf(b, quarters, runOrder));
   const unplaced: UnplacedPart[] = [...tooLarge.map((item) => unplacedItem(item, 'larger-than-stock', stock)), ...best.unplaced.map((item) => unplacedItem(item, 'out-of-stock', stock))];
   const placedItems = best.boards.flatMap((b) => b.spots.map((s) => s.item));
   return {
     boards,
     unplaced,
     splitGroups,
+    splitWarnings,
     quarters,
     boardFeetBought: sum(boards.map((b) => b.boardFeet)),
     boardFeetToBuy: sum(boards.filter((b) => !b.inStock).map((b) => b.boardFeet)),
@@ -116,7 +129,7 @@ function boardScore(attempt: BoardAttempt, quarters: number): number[] {
   return [attempt.unplaced.length, bought, fromStock, attempt.boards.length];
 }
 
-function boardPlanOf(board: BoardFill, quarters: number): BoardPlan {
+function boardPlanOf(board: BoardFill, quarters: number, runOrder: ReadonlyMap<BoardItem, number>): BoardPlan {
   const s = board.stock;
   return {
     stockId: s.id,
@@ -130,6 +143,8 @@ function boardPlanOf(board: BoardFill, quarters: number): BoardPlan {
       name: item.name,
       instance: item.instance,
       matchGroup: item.group,
+      matchOrder: runOrder.get(item) ?? null,
+      matchLabel: item.label,
       finished: item.finished,
       x,
       y,
@@ -140,6 +155,21 @@ function boardPlanOf(board: BoardFill, quarters: number): BoardPlan {
     boardFeet: boardFeet(quarters / 4, s.widthMm / MM_PER_INCH, s.lengthMm / MM_PER_INCH),
     yield: board.area() / (s.lengthMm * s.widthMm),
   };
+}
+
+function splitWarning(group: string, unit: BoardUnit, stock: readonly BoardStock[], kerfMm: number): SplitGroupWarning {
+  const label = unit[0]!.label ?? unit[0]!.name;
+  const slots = unit[0]!.order !== null ? runSlots(unit, kerfMm) : null;
+  const lengthNeededMm = slots ? sum(slots.map((s) => s.length)) + kerfMm * (slots.length - 1) : Math.max(...unit.map((i) => i.lengthMm));
+  const widthNeededMm = slots ? Math.max(...slots.map((s) => s.width)) : Math.max(...unit.map((i) => i.widthMm));
+  const inches = (mm: number) => formatLength(mm, { unit: 'in' });
+  const longest = Math.max(...stock.map((s) => s.lengthMm));
+  const widest = Math.max(...stock.map((s) => s.widthMm));
+  const need = slots
+    ? `its ${slots.length} parts end to end need one board ${inches(lengthNeededMm)} long and ${inches(widthNeededMm)} wide, kerfs included`
+    : `its ${unit.length} parts (longest ${inches(lengthNeededMm)}, widest ${inches(widthNeededMm)}) do not all fit on one board`;
+  const message = `Grain match of ${label}: ${need}; no board on offer holds them clear of defects (longest ${inches(longest)}, widest ${inches(widest)}). They are laid out separately: pick boards of like colour and figure, or add a board that size to the stock.`;
+  return { group, label, lengthNeededMm, widthNeededMm, message };
 }
 
 function unplacedItem(item: BoardItem, reason: 'larger-than-stock' | 'out-of-stock', stock: readonly BoardStock[]): UnplacedPart {

@@ -2,13 +2,16 @@
  * One attempt at the board layout: boards are filled one at a time. For each next board every
  * available size is tried, filled greedily down the order, and the one that uses its wood best
  * is kept (boards already in stock come first, whatever they yield). A grain-match group goes
- * onto a board whole or not at all.
+ * onto a board whole or not at all; a grain-matched run, end to end in its order.
  */
 import { BoardFill } from './boardFill.ts';
 import type { BoardItem } from './boardInput.ts';
 import type { BoardStock } from './boardTypes.ts';
 
-/** A single part instance, or a grain-match group that must share a board. */
+/**
+ * A single part instance, or a grain-match group that must share a board: a run (items with an
+ * order, sorted by it) goes end to end, an unordered group anywhere on the board.
+ */
 export type BoardUnit = readonly BoardItem[];
 
 /** The boards of an attempt and the units no available board could take. */
@@ -21,6 +24,7 @@ export interface BoardAttempt {
 export function placeUnit(board: BoardFill, unit: BoardUnit): BoardFill | null {
   if (unit.length === 1) return board.tryPlace(unit[0] as BoardItem) ? board : null;
   const trial = board.clone();
+  if (unit[0]!.order !== null) return trial.tryPlaceRun(unit) ? trial : null;
   for (const item of unit) if (!trial.tryPlace(item)) return null;
   return trial;
 }

@@ -24,6 +24,25 @@ export interface BoardPartInput {
    * boards of a lid, a bank of drawer fronts). Each instance of the part joins the group.
    */
   matchGroup?: string;
+  /**
+   * A run cut end to end from one board, in order along its length, so the grain runs on from
+   * part to part (a column of drawer fronts). Parts at the same order share one crosscut length,
+   * ripped side by side (the boards of a glued-up front); every instance of the part joins the
+   * run at this order. A part takes `matchGroup` or `grainMatch`, not both.
+   */
+  grainMatch?: GrainRun;
+  /** Number of the part's first instance, for a part split over several inputs; default 0. */
+  firstInstance?: number;
+}
+
+/** A part's place in a grain-matched run; see {@link BoardPartInput.grainMatch}. */
+export interface GrainRun {
+  /** Shared by the parts of one run. */
+  group: string;
+  /** Position along the board, lowest at the board's end; ties keep the input order. */
+  order: number;
+  /** The run in the maker's words for diagrams and warnings, e.g. `drawer fronts, column 1`. */
+  note?: string;
 }
 
 /** A knot, check or split to cut around: a region of the board, mm from its end and edge. */
@@ -63,6 +82,10 @@ export interface PlacedBoardPart extends Rect {
   name: string;
   instance: number;
   matchGroup: string | null;
+  /** 1-based place in its grain-matched run along the board; null when not in a run. */
+  matchOrder: number | null;
+  /** The run in the maker's words, e.g. `drawer fronts, column 1`; null when not in a run. */
+  matchLabel: string | null;
   /** Finished length, width and thickness, mm. */
   finished: readonly [number, number, number];
 }
@@ -102,6 +125,8 @@ export interface BoardLayout {
   unplaced: UnplacedPart[];
   /** Match groups that would not fit on any one board and were spread over several. */
   splitGroups: string[];
+  /** Why each group of `splitGroups` was split, in the same order. */
+  splitWarnings: SplitGroupWarning[];
   quarters: number;
   /** Board feet of the boards used (NHLA rules: under 1 in counts as 1 in). */
   boardFeetBought: number;
@@ -115,3 +140,15 @@ export interface BoardLayout {
   attemptsRun: number;
   cancelled: boolean;
 }
+
+/** A grain-match group no board could hold whole, and what it would have needed, mm. */
+export interface SplitGroupWarning {
+  group: string;
+  /** The group in the maker's words (the run's note, or its id). */
+  label: string;
+  /** A run's length end to end with kerfs and its widest length (or an unordered group's longest and widest part). */
+  lengthNeededMm: number;
+  widthNeededMm: number;
+  message: string;
+}
+

@@ -9,4 +9,4 @@ export * from './boardTypes.ts';
 export { DEFAULT_BOARD_SIZES, DEFAULT_ALLOWANCE } from './boardInput.ts';
 export { layoutBoards, boardLayoutSteps } from './boardOptimiser.ts';
 export { binPackingInstance, CLASS_NAMES, type BinPackingClass, type BinPackingInstance } from './binPackingClasses.ts';
-export { sheetDiagram, boardDiagram, fitLabel, MAX_LABEL_MM, MIN_LABEL_OF_LENGTH, type LabelFit, type SheetDiagram, type BoardDiagram, type DiagramPart, type DiagramCut, type DiagramBox } from './diagram.ts';
+export { sheetDiagram, boardDiagram, matchRunsOf, fitLabel, MAX_LABEL_MM, MIN_LABEL_OF_LENGTH, type LabelFit, type SheetDiagram, type BoardDiagram, type DiagramPart, type DiagramCut, type DiagramBox, type DiagramMatchRun } from './diagram.ts';

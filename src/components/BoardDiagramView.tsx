@@ -19,13 +19,16 @@ const GRAIN_STEP_MM = 22;
 /**
  * One board's cutting diagram, to scale: grain along its length, parts at their rough size
  * labelled with the cut-list name and rough size, crosscuts as numbered kerf-wide bands, knots
- * and checks hatched in pencil red, and grain-match groups outlined.
+ * and checks hatched in pencil red, grain-match groups outlined and grain-matched runs bracketed
+ * under the board with their note.
  */
 export function BoardDiagramView({ plan, kerfMm, longestMm, title, splitGroups }: Props) {
   const hatch = useId();
   const length = useLength();
-  const d = useMemo(() => boardDiagram(plan, kerfMm), [plan, kerfMm]);
+  const d = useMemo(() => boardDiagram(plan, kerfMm, splitGroups), [plan, kerfMm, splitGroups]);
   const text = longestMm / 90;
+  // Room under the board for the brackets of grain-matched runs.
+  const band = d.matchRuns.length > 0 ? text * 2.2 : 0;
   const rows = Math.max(1, Math.floor(d.widthMm / GRAIN_STEP_MM));
   const keyed = d.parts.filter((p) => p.labelMm === 0);
   const sizeOf = (p: (typeof d.parts)[number]) => `${length(p.lengthMm)} × ${length(p.widthMm)}`;
@@ -37,7 +40,7 @@ export function BoardDiagramView({ plan, kerfMm, longestMm, title, splitGroups }
           {plan.inStock ? 'in stock · ' : ''}{length(plan.lengthMm)} × {length(plan.widthMm)} · {plan.boardFeet.toFixed(2)} bd ft · yield {(plan.yield * 100).toFixed(0)} %
         </span>
       </figcaption>
-      <svg viewBox={`0 0 ${d.lengthMm} ${d.widthMm}`} style={{ width: `${(100 * d.lengthMm) / longestMm}%` }} className="h-auto overflow-visible" role="img"
+      <svg viewBox={`0 0 ${d.lengthMm} ${d.widthMm + band}`} style={{ width: `${(100 * d.lengthMm) / longestMm}%` }} className="h-auto overflow-visible" role="img"
         aria-label={`${title}: ${d.parts.length} parts, ${d.crosscuts.length} crosscuts${d.defects.length ? `, ${d.defects.length} defects` : ''}`}>
         <defs>
           <pattern id={hatch} width={text * 0.5} height={text * 0.5} patternUnits="userSpaceOnUse" patternTransform="rotate(45)">
@@ -52,7 +55,7 @@ export function BoardDiagramView({ plan, kerfMm, longestMm, title, splitGroups }
           const split = p.matchGroup !== null && splitGroups.includes(p.matchGroup);
           return (
             <g key={`${p.partId}-${p.instance}`} data-part={p.name}>
-              <title>{`${p.name} #${p.instance + 1}: ${sizeOf(p)} rough${p.matchGroup ? ` · grain-match group${split ? ' (split over boards)' : ''}` : ''}`}</title>
+              <title>{`${p.name} #${p.instance + 1}: ${sizeOf(p)} rough${p.matchGroup ? ` · grain-match group${p.matchOrder !== null ? `, place ${p.matchOrder} in the run` : ''}${split ? ' (split over boards)' : ''}` : ''}`}</title>
               <rect x={p.x} y={p.y} width={p.w} height={p.h} className={`fill-sheet/85 ${split ? 'stroke-pencil' : 'stroke-graphite'}`} strokeWidth={text * 0.1}
                 strokeDasharray={p.matchGroup ? `${text * 0.6} ${text * 0.3}` : undefined} />
               <DiagramPartLabel part={p} size={sizeOf(p)} />
@@ -74,6 +77,17 @@ export function BoardDiagramView({ plan, kerfMm, longestMm, title, splitGroups }
             </text>
           </g>
         ))}
+        {d.matchRuns.map((m) => {
+          const y = d.widthMm + text * 0.5;
+          return (
+            <g key={m.group} data-run={m.group} className={m.partial ? 'stroke-pencil fill-pencil' : 'stroke-graphite fill-graphite'}>
+              <path d={`M ${m.fromMm} ${y - text * 0.35} V ${y} H ${m.toMm} V ${y - text * 0.35}`} fill="none" strokeWidth={text * 0.1} />
+              <text x={m.fromMm} y={y + text * 0.3} fontSize={m.labelMm > 0 ? Math.min(m.labelMm, text) : text * 0.75} dominantBaseline="hanging" stroke="none">
+                {m.text}
+              </text>
+            </g>
+          );
+        })}
       </svg>
       {(keyed.length > 0 || d.defects.length > 0) && (
         <p className="mt-0.5 text-xs text-graphite-soft">
