@@ -4,9 +4,9 @@
  * quantity and one `Placement` each, and joints between instances become joints between parts.
  */
 import { assert } from '../assert.ts';
-import type { Box3, Feature, Grain, GlueUpPlan, GrainMatch, Joint, JointType, Material, Part, PartRole, Placement, RoughSize, Vec3 } from './types.ts';
+import type { Box3, Feature, Grain, GlueUpPlan, GrainMatch, Joint, JointType, Material, Part, PartFace, PartRole, Placement, RoughSize, Vec3 } from './types.ts';
 import { describeFeature, type FeatureDraft } from './geometry/featureDescribe.ts';
-import { oppositeAxis, placeInto, type AxisMap } from './geometry/placement.ts';
+import { localFaceOf, oppositeAxis, placeInto, worldBoxToLocalInto, type AxisMap } from './geometry/placement.ts';
 
 /** Id and maker's name for a set of identical instances, given their member names. */
 export type PartNamer = (members: readonly string[]) => { id: string; name: string };
@@ -71,24 +71,132 @@ type ShapeKey = (string | number)[];
 
 const snap = (n: number): number => Math.round(n * 1e4 + 0.3);
 
-function pushBox(out: ShapeKey, box: Box3): void {
-  out.push(snap(box.min[0]), snap(box.min[1]), snap(box.min[2]), snap(box.max[0]), snap(box.max[1]), snap(box.max[2]));
+/**
+ * One instance's shape in its frame for one turn, worked out from its feature drafts without
+ * making features: only the first instance of each part needs them, and describing every cut
+ * of every instance in full was most of the time spent matching.
+ */
+interface Shape {
+  key: ShapeKey;
+  /** The id each feature draft takes in the part, by its index in `draft.features`. */
+  ids: string[];
+  /** Indices of `draft.features` in id order, the order of the part's features. */
+  order: number[];
+  /** Feature id in the draft → id in the part; null when no id is templated (all as drafted). */
+  idMap: Map<string, string> | null;
 }
 
-function shapeKey(draft: PartDraft, features: readonly Feature[]): ShapeKey {
-  const material = draft.material.kind === 'solid' ? draft.material.speciesId : draft.material.sheetId;
-  const out: ShapeKey = [draft.role, material, draft.grain, snap(draft.size[0]), snap(draft.size[1]), snap(draft.size[2]), draft.glueUp?.boards ?? 0];
-  for (const f of features) {
-    out.push('|', f.id, f.type, f.face);
-    for (const box of f.removed) pushBox(out, box);
-    if (f.type === 'tongue') pushBox(out, f.tongue);
-    if (f.type === 'hole' || f.type === 'slot') out.push(snap(f.diameterMm));
-    if (f.type === 'slot') out.push(snap(f.slotLengthMm));
+// Templated ids repeat from build to build (`tongue-end-a`, `screw-hole-3`): made once and
+// shared, so they cost no string building and compare by reference when sorted and matched.
+const templatedIds = new Map<string, Map<string, string[]>>();
+
+function templatedId(template: string, face: string, n: number): string {
+  let byFace = templatedIds.get(template);
+  if (!byFace) {
+    byFace = new Map();
+    templatedIds.set(template, byFace);
   }
-  return out;
+  let byN = byFace.get(face);
+  if (!byN) {
+    byN = [];
+    byFace.set(face, byN);
+  }
+  let id = byN[n];
+  if (id === undefined) {
+    id = template.replace('{face}', face).replace('{n}', String(n));
+    byN[n] = id;
+  }
+  return id;
+}
+
+// Scratch for one local box: min x, y, z, max x, y, z. Written and read within one call.
+const local = new Float64Array(6);
+
+function pushLocalBox(out: ShapeKey, box: Box3, draft: PartDraft, axes: AxisMap): void {
+  worldBoxToLocalInto(box, draft.size, axes, draft.world.min, local, 0);
+  out.push(snap(local[0]!), snap(local[1]!), snap(local[2]!), snap(local[3]!), snap(local[4]!), snap(local[5]!));
+}
+
+/** The shape of `draft` in its frame for `axes`: templated ids filled in, features in id order. */
+function shapeOf(draft: PartDraft, axes: AxisMap): Shape {
+  const drafts = draft.features;
+  const n = drafts.length;
+  const faces: PartFace[] = [];
+  const ids: string[] = [];
+  let templated = false;
+  for (let i = 0; i < n; i++) {
+    const fd = drafts[i]!;
+    faces.push(localFaceOf(axes, fd.faceDir));
+    ids.push(fd.id);
+    if (fd.idTemplate) templated = true;
+  }
+  let idMap: Map<string, string> | null = null;
+  if (templated) {
+    // Templated ids number features in order along the part: by the low corner of each one's
+    // first box (a tongue's own solid when it removes nothing).
+    const low = new Float64Array(3 * n);
+    for (let i = 0; i < n; i++) {
+      const fd = drafts[i]!;
+      const first = fd.removed[0] ?? (fd.type === 'tongue' ? fd.tongue : undefined);
+      if (!first) continue;
+      worldBoxToLocalInto(first, draft.size, axes, draft.world.min, local, 0);
+      low[3 * i] = local[0]!;
+      low[3 * i + 1] = local[1]!;
+      low[3 * i + 2] = local[2]!;
+    }
+    const along: number[] = [];
+    for (let i = 0; i < n; i++) along.push(i);
+    along.sort((i, j) => low[3 * i]! - low[3 * j]! || low[3 * i + 1]! - low[3 * j + 1]! || low[3 * i + 2]! - low[3 * j + 2]!);
+    const counters = new Map<string, number>();
+    idMap = new Map();
+    for (const i of along) {
+      const fd = drafts[i]!;
+      if (fd.idTemplate) {
+        const count = (counters.get(fd.idTemplate) ?? 0) + 1;
+        counters.set(fd.idTemplate, count);
+        ids[i] = templatedId(fd.idTemplate, faces[i]!, count);
+      }
+      idMap.set(fd.id, ids[i]!);
+    }
+  }
+  const order: number[] = [];
+  for (let i = 0; i < n; i++) order.push(i);
+  order.sort((i, j) => (ids[i]! < ids[j]! ? -1 : ids[i]! > ids[j]! ? 1 : 0));
+
+  const material = draft.material.kind === 'solid' ? draft.material.speciesId : draft.material.sheetId;
+  const key: ShapeKey = [draft.role, material, draft.grain, snap(draft.size[0]), snap(draft.size[1]), snap(draft.size[2]), draft.glueUp?.boards ?? 0];
+  for (const i of order) {
+    const fd = drafts[i]!;
+    key.push('|', ids[i]!, fd.type, faces[i]!);
+    for (const box of fd.removed) pushLocalBox(key, box, draft, axes);
+    // A tongue without its solid, a hole without its diameter: never matched here, and the
+    // first instance's features assert on them.
+    if (fd.type === 'tongue' && fd.tongue) pushLocalBox(key, fd.tongue, draft, axes);
+    if (fd.type === 'hole' || fd.type === 'slot') key.push(snap(fd.diameterMm ?? Number.NaN));
+    if (fd.type === 'slot') key.push(snap(fd.slot?.lengthMm ?? Number.NaN));
+  }
+  return { key, ids, order, idMap };
+}
+
+/** The features of `draft` in its frame for `axes`, as `shape` names and orders them. */
+function featuresOf(draft: PartDraft, axes: AxisMap, shape: Shape): Feature[] {
+  const features: Feature[] = [];
+  for (const i of shape.order) {
+    const feature = describeFeature(draft.features[i]!, draft.size, axes, draft.world.min);
+    // Made just above for this part alone, so it is named in place rather than copied.
+    feature.id = shape.ids[i]!;
+    features.push(feature);
+  }
+  return features;
 }
 
 function sameShape(a: ShapeKey, b: ShapeKey): boolean {
+  if (a.length !== b.length) return false;
+  for (let i = 0; i < a.length; i++) if (a[i] !== b[i]) return false;
+  return true;
+}
+
+function sameIds(a: readonly string[], b: readonly string[]): boolean {
   if (a.length !== b.length) return false;
   for (let i = 0; i < a.length; i++) if (a[i] !== b[i]) return false;
   return true;
@@ -99,49 +207,29 @@ function turned(axes: AxisMap): AxisMap {
   return { length: oppositeAxis(axes.length), width: oppositeAxis(axes.width), thickness: axes.thickness };
 }
 
-/** Features of `draft` in its frame for `axes`, with templated ids filled in. */
-function describeAll(draft: PartDraft, axes: AxisMap): { features: Feature[]; ids: Map<string, string> } {
-  const drafts = draft.features;
-  const described: Feature[] = [];
-  let templated = false;
-  for (const fd of drafts) {
-    described.push(describeFeature(fd, draft.size, axes, draft.world.min));
-    if (fd.idTemplate) templated = true;
-  }
-  const ids = new Map<string, string>();
-  if (templated) {
-    // Templated ids number features in order along the part: by the low corner of each one's
-    // first box (a tongue's own solid when it removes nothing).
-    const low = (f: Feature): Vec3 | undefined => (f.removed[0] ?? (f.type === 'tongue' ? f.tongue : undefined))?.min;
-    const order = described.map((_, i) => i).sort((i, j) => {
-      const ra = low(described[i]!);
-      const rb = low(described[j]!);
-      return (ra?.[0] ?? 0) - (rb?.[0] ?? 0) || (ra?.[1] ?? 0) - (rb?.[1] ?? 0) || (ra?.[2] ?? 0) - (rb?.[2] ?? 0);
-    });
-    const counters = new Map<string, number>();
-    for (const i of order) {
-      const fd = drafts[i]!;
-      const feature = described[i]!;
-      let id = fd.id;
-      if (fd.idTemplate) {
-        const n = (counters.get(fd.idTemplate) ?? 0) + 1;
-        counters.set(fd.idTemplate, n);
-        id = fd.idTemplate.replace('{face}', feature.face).replace('{n}', String(n));
-      }
-      ids.set(fd.id, id);
-      // Made just above for this part alone, so it is named in place rather than copied.
-      feature.id = id;
-    }
-  }
-  const features = described.sort((a, b) => (a.id < b.id ? -1 : a.id > b.id ? 1 : 0));
-  return { features, ids };
-}
-
 /** Identical instances of one part, in the order first met. */
 interface PartClass {
   key: ShapeKey;
   drafts: PartDraft[];
   features: Feature[];
+}
+
+/** How a drafted instance was taken into its part: its turn and its features' ids. */
+interface Chosen {
+  axes: AxisMap;
+  idMap: Map<string, string> | null;
+}
+
+/** Joints between the same features of the same parts with the same clearance, counted. */
+interface JointTally {
+  type: JointType;
+  a: string;
+  b: string;
+  aFeatures: string[];
+  bFeatures: string[];
+  clearance: number;
+  first: JointDraft;
+  count: number;
 }
 
 // Every instance of a part in a run, or none: a part half in runs has no sensible board order.
@@ -161,34 +249,30 @@ export function assemble(drafts: readonly PartDraft[], joints: readonly JointDra
   // instance is compared with its group's shapes one by one.
   const classes: PartClass[] = [];
   const byGroup = new Map<string, PartClass[]>();
-  const chosen = new Map<PartDraft, { axes: AxisMap; ids: Map<string, string> }>();
+  const chosen = new Map<PartDraft, Chosen>();
   for (const draft of drafts) {
-    const a = describeAll(draft, draft.axes);
-    const keyA = shapeKey(draft, a.features);
+    const shapeA = shapeOf(draft, draft.axes);
     const inGroup = byGroup.get(draft.group);
     let axes = draft.axes;
-    let described = a;
-    let key = keyA;
-    let match = inGroup?.find((c) => sameShape(c.key, keyA));
+    let shape = shapeA;
+    let match = inGroup?.find((c) => sameShape(c.key, shapeA.key));
     // Only a group already holding a part can hold this one's turned twin.
     if (!match && inGroup) {
       const other = turned(draft.axes);
-      const b = describeAll(draft, other);
-      const keyB = shapeKey(draft, b.features);
-      const twin = inGroup.find((c) => sameShape(c.key, keyB));
+      const shapeB = shapeOf(draft, other);
+      const twin = inGroup.find((c) => sameShape(c.key, shapeB.key));
       if (twin) {
         match = twin;
         axes = other;
-        described = b;
-        key = keyB;
+        shape = shapeB;
       }
     }
-    chosen.set(draft, { axes, ids: described.ids });
+    chosen.set(draft, { axes, idMap: shape.idMap });
     if (match) {
       match.drafts.push(draft);
       continue;
     }
-    const created: PartClass = { key, drafts: [draft], features: described.features };
+    const created: PartClass = { key: shape.key, drafts: [draft], features: featuresOf(draft, axes, shape) };
     classes.push(created);
     if (inGroup) inGroup.push(created);
     else byGroup.set(draft.group, [created]);
@@ -220,30 +304,42 @@ export function assemble(drafts: readonly PartDraft[], joints: readonly JointDra
     });
   }
 
-  const byKey = new Map<string, Joint>();
+  // Joints between the same features of the same two parts with the same clearance are one
+  // joint with a count, compared field by field among the joints of the same first part.
+  const tallies: JointTally[] = [];
+  const byFirstPart = new Map<string, JointTally[]>();
+  const partIds = (member: JointDraft['a']): string[] => {
+    const idMap = chosen.get(member.draft)!.idMap;
+    return idMap ? member.featureIds.map((id) => idMap.get(id) ?? id) : member.featureIds.slice();
+  };
   for (const j of joints) {
     const a = partIdOf.get(j.a.draft)!;
     const b = partIdOf.get(j.b.draft)!;
-    const aFeatures = j.a.featureIds.map((id) => chosen.get(j.a.draft)!.ids.get(id) ?? id);
-    const bFeatures = j.b.featureIds.map((id) => chosen.get(j.b.draft)!.ids.get(id) ?? id);
-    const key = `${j.type}|${a}|${aFeatures.join(',')}|${b}|${bFeatures.join(',')}|${round6(j.clearanceMm)}`;
-    const existing = byKey.get(key);
+    const aFeatures = partIds(j.a);
+    const bFeatures = partIds(j.b);
+    const clearance = round6(j.clearanceMm);
+    const sameA = byFirstPart.get(a);
+    const existing = sameA?.find((t) => t.type === j.type && t.b === b && t.clearance === clearance && sameIds(t.aFeatures, aFeatures) && sameIds(t.bFeatures, bFeatures));
     if (existing) {
-      byKey.set(key, { ...existing, count: existing.count + 1 });
+      existing.count++;
       continue;
     }
-    byKey.set(key, {
-      id: `${a}:${b}:${j.type}`,
-      type: j.type,
-      members: [{ partId: a, featureIds: aFeatures }, { partId: b, featureIds: bFeatures }],
-      count: 1, clearanceMm: j.clearanceMm, glued: j.glued, floating: j.floating, note: j.note,
-    });
+    const tally: JointTally = { type: j.type, a, b, aFeatures, bFeatures, clearance, first: j, count: 1 };
+    tallies.push(tally);
+    if (sameA) sameA.push(tally);
+    else byFirstPart.set(a, [tally]);
   }
   const seen = new Map<string, number>();
-  const jointList = [...byKey.values()].map((joint) => {
-    const n = seen.get(joint.id) ?? 0;
-    seen.set(joint.id, n + 1);
-    return n === 0 ? joint : { ...joint, id: `${joint.id}:${n + 1}` };
+  const jointList: Joint[] = tallies.map(({ type, a, b, aFeatures, bFeatures, first, count }) => {
+    const base = `${a}:${b}:${type}`;
+    const n = seen.get(base) ?? 0;
+    seen.set(base, n + 1);
+    return {
+      id: n === 0 ? base : `${base}:${n + 1}`,
+      type,
+      members: [{ partId: a, featureIds: aFeatures }, { partId: b, featureIds: bFeatures }],
+      count, clearanceMm: first.clearanceMm, glued: first.glued, floating: first.floating, note: first.note,
+    };
   });
   return { parts, placements, joints: jointList, partIdOf };
 }

@@ -121,6 +121,20 @@ export function worldBoxToLocal(box: Box3, size: Vec3, axes: AxisMap, positionMm
   return { min, max };
 }
 
+/**
+ * `worldBoxToLocal` written into `out` from index `at`: the local box's min x, y, z then max
+ * x, y, z (mm), the same numbers without a box object, for loops that only compare them.
+ */
+export function worldBoxToLocalInto(box: Box3, size: Vec3, axes: AxisMap, positionMm: Vec3, out: Float64Array | number[], at: number): void {
+  for (let i = 0; i < 3; i++) {
+    const { index, sign } = parseAxis(localAxis(axes, i));
+    const lo = box.min[index]! - positionMm[index]!;
+    const hi = box.max[index]! - positionMm[index]!;
+    out[at + i] = sign > 0 ? lo : size[i]! - hi;
+    out[at + 3 + i] = sign > 0 ? hi : size[i]! - lo;
+  }
+}
+
 const FACE_BY_LOCAL: readonly (readonly [PartFace, PartFace])[] = [
   ['end-a', 'end-b'],
   ['edge-a', 'edge-b'],
