@@ -16,6 +16,7 @@ interface PieceViewProps {
   cutaway: Cutaway | null;
   view: ViewName;
   room?: RoomScene | null;
+  roomFraming?: 'piece' | 'room';
   paintHex?: string | null;
   className?: string;
 }
@@ -36,6 +37,7 @@ export function SceneViewport({ result, stale, room = null }: { result: PieceRes
   const explode = useEditorStore((s) => s.explode);
   const cutaway = useEditorStore((s) => s.cutaway);
   const view = useEditorStore((s) => s.view);
+  const roomFraming = useEditorStore((s) => s.roomFraming);
   const select = useEditorStore((s) => s.select);
   const hover = useEditorStore((s) => s.hover);
   // A painted piece is shown in the paint picked under the view (a view setting, not saved).
@@ -56,6 +58,7 @@ export function SceneViewport({ result, stale, room = null }: { result: PieceRes
               cutaway={cutaway}
               view={view}
               room={room}
+              roomFraming={roomFraming}
               paintHex={paintHex}
               className="h-full w-full"
             />

@@ -19,7 +19,8 @@ const AXES = [
 
 /**
  * Preset views, the explode slider and the cut-away plane, under the 3D view; with
- * `roomAvailable`, the switch that stands the piece in its room (explode and cut-away then rest);
+ * `roomAvailable`, the switch that stands the piece in its room (explode and cut-away then rest)
+ * and, while it does, the switch between framing the piece and framing the whole room;
  * with `painted` (the finish is paint), the colour the view paints it.
  */
 export function ViewControls({ bboxMin, bboxSize, roomAvailable = false, painted = false }: { bboxMin: Vec3; bboxSize: Vec3; roomAvailable?: boolean; painted?: boolean }) {
@@ -27,9 +28,10 @@ export function ViewControls({ bboxMin, bboxSize, roomAvailable = false, painted
   const setPaint = usePaintView((s) => s.setPaint);
   const view = useEditorStore((s) => s.view);
   const inRoom = useEditorStore((s) => s.roomView) && roomAvailable;
+  const roomFraming = useEditorStore((s) => s.roomFraming);
   const explode = useEditorStore((s) => s.explode);
   const cutaway = useEditorStore((s) => s.cutaway);
-  const { setView, setExplode, setCutaway, setRoomView } = useEditorStore.getState();
+  const { setView, setExplode, setCutaway, setRoomView, setRoomFraming } = useEditorStore.getState();
   const length = useLength();
   const axis = AXES.find((a) => a.axis === cutaway?.axis);
   const lo = axis ? bboxMin[axis.index] : 0;
@@ -49,6 +51,13 @@ export function ViewControls({ bboxMin, bboxSize, roomAvailable = false, painted
         <button type="button" aria-pressed={inRoom} onClick={() => setRoomView(!inRoom)} title="Show the piece standing in its room, opened as the room-fit checks open it"
           className={`rounded-sm border border-graphite px-2 py-1 ${inRoom ? 'bg-graphite text-sheet' : 'hover:bg-paper-deep'}`}>
           In the room
+        </button>
+      )}
+      {inRoom && (
+        <button type="button" aria-pressed={roomFraming === 'room'} onClick={() => setRoomFraming(roomFraming === 'room' ? 'piece' : 'room')}
+          title="Frame the whole room instead of the piece and the room around it"
+          className={`rounded-sm border border-graphite px-2 py-1 ${roomFraming === 'room' ? 'bg-graphite text-sheet' : 'hover:bg-paper-deep'}`}>
+          Whole room
         </button>
       )}
       <label className={`flex items-center gap-2 ${inRoom ? 'opacity-50' : ''}`}>

@@ -24,8 +24,11 @@
  *    then draws the room lightly around the piece — floor, walls, door and window openings,
  *    baseboards, sills, door landings and obstacles — with the piece at its room placement, its
  *    lid and doors swung and drawers pulled to the positions the checks tested, and every part
- *    and room solid a check found meeting in pencil red. Presets frame the whole room; explode
- *    and the cut-away are set aside while the room is shown.
+ *    and room solid a check found meeting in pencil red. Presets frame the opened piece with the
+ *    room around it (`roomFocusBox`); explode and the cut-away are set aside while the room is
+ *    shown.
+ *  - `roomFraming` (optional, room view only): `'piece'` (the default) frames the opened piece
+ *    and its surroundings, `'room'` the whole room; a change glides the camera there.
  *  - `paintHex` (optional): the paint colour of a piece whose finish is paint; parts that take
  *    paint (all but the drawer boxes) are drawn flat in it instead of their wood.
  *  - `className`: sizing of the wrapper; the canvas fills it.
@@ -48,7 +51,7 @@ import { PartMesh } from './PartMesh.tsx';
 import { createPartSolidCache } from './partGeometry.ts';
 import { RoomLayer } from './RoomLayer.tsx';
 import { RenderMarks } from './RenderMarks.tsx';
-import { placeInRoom, type RoomSceneData } from './roomSceneModel.ts';
+import { placeInRoom, roomFocusBox, type RoomSceneData } from './roomSceneModel.ts';
 import { ENGINE_TO_THREE_ROTATION_X, SCENE_SCALE } from './sceneFrame.ts';
 import { sceneModel } from './sceneModel.ts';
 import { SectionCaps, sectionRenderOrder } from './SectionCaps.tsx';
@@ -73,6 +76,7 @@ export interface PieceViewProps {
   cutaway: null | Cutaway;
   view: PresetView;
   room?: RoomSceneData | null;
+  roomFraming?: 'piece' | 'room';
   paintHex?: string | null;
   className?: string;
 }
@@ -114,7 +118,10 @@ function PieceScene(props: PieceViewProps) {
   const inRoom = useMemo(() => (room ? placeInRoom(pieceModel, room) : null), [pieceModel, room]);
   const meshes = inRoom ? inRoom.meshes : pieceModel.meshes;
   // Exploded, the parts spread past the assembled box (the lid rises off the top): frame what is drawn.
-  const frameBounds = room ? room.roomBox : explode > 0 ? pieceModel.bounds : assembledBounds;
+  // In the room: the opened piece and what is around it, or the whole room when asked.
+  const roomFraming = props.roomFraming ?? 'piece';
+  const roomBounds = useMemo(() => (room && inRoom ? (roomFraming === 'room' ? room.roomBox : roomFocusBox(inRoom, room)) : null), [room, inRoom, roomFraming]);
+  const frameBounds = roomBounds ?? (explode > 0 ? pieceModel.bounds : assembledBounds);
   // Cut solids come in idle time; until then a part is its plain box (typing never waits on CSG).
   useIdleSolids(solids, result.parts);
   const solidsReady = solids.pendingCount(result.parts) === 0;
@@ -171,7 +178,7 @@ function PieceScene(props: PieceViewProps) {
       </group>
       {section && <SectionCaps plane={section} bounds={pieceModel.bounds} meshes={pieceModel.meshes} hatches={hatches} materials={materials} />}
       <OrbitControls makeDefault enableDamping={false} zoomToCursor />
-      <CameraRig view={view} bounds={frameBounds} framingKey={`${result.kind}|${room ? 'room' : 'piece'}`} fitKey={room ? 'room' : explode.toFixed(2)} />
+      <CameraRig view={view} bounds={frameBounds} framingKey={`${result.kind}|${room ? `room:${roomFraming}` : 'piece'}`} fitKey={room ? `room:${roomFraming}` : explode.toFixed(2)} />
       <RenderMarks result={result} solidsReady={solidsReady} />
     </>
   );

@@ -81,3 +81,26 @@ export function placeInRoom(model: SceneModel, room: RoomScene): RoomPieceModel 
     collidingSolidIds: new Set(room.collisions.map((c) => c.solidId)),
   };
 }
+
+/**
+ * Room kept in view around the opened piece (mm): enough to see the wall behind it, a sill
+ * above a lid, the floor in front of pulled drawers. A choice of framing, not a clearance rule.
+ */
+export const ROOM_FOCUS_MARGIN_MM = 450;
+
+/**
+ * The box the room view frames by default (room coordinates, mm): the placed piece with its
+ * lid, doors and drawers open as checked, and every place a check found something meeting it,
+ * grown by `marginMm` on every side, from the floor up, and kept inside the room.
+ */
+export function roomFocusBox(placed: RoomPieceModel, room: RoomScene, marginMm = ROOM_FOCUS_MARGIN_MM): Box3 {
+  const boxes = [...placed.meshes.map((m) => m.worldBox), ...room.collisions.flatMap((c) => (c.overlapMm ? [c.overlapMm] : []))];
+  if (boxes.length === 0) return room.roomBox;
+  const min = [0, 1, 2].map((k) => Math.min(...boxes.map((b) => b.min[k]!)) - marginMm);
+  const max = [0, 1, 2].map((k) => Math.max(...boxes.map((b) => b.max[k]!)) + marginMm);
+  const inRoom = (k: number, v: number) => Math.min(room.roomBox.max[k]!, Math.max(room.roomBox.min[k]!, v));
+  return {
+    min: [inRoom(0, min[0]!), inRoom(1, min[1]!), room.roomBox.min[2]],
+    max: [inRoom(0, max[0]!), inRoom(1, max[1]!), inRoom(2, max[2]!)],
+  };
+}

@@ -31,6 +31,8 @@ interface EditorState {
   view: ViewName;
   /** True when the 3D view shows the piece standing in its room (the spec's room section). */
   roomView: boolean;
+  /** In the room view, what the camera frames: the opened piece and its surroundings, or the whole room. */
+  roomFraming: 'piece' | 'room';
   /** Which form the parameter column shows: the piece's parameters or its room. */
   formTab: 'piece' | 'room';
 
@@ -58,6 +60,7 @@ interface EditorState {
   setCutaway: (cutaway: Cutaway | null) => void;
   setView: (view: ViewName) => void;
   setRoomView: (roomView: boolean) => void;
+  setRoomFraming: (roomFraming: 'piece' | 'room') => void;
   setFormTab: (formTab: 'piece' | 'room') => void;
 }
 
@@ -72,6 +75,7 @@ export const useEditorStore = create<EditorState>()((set) => ({
   cutaway: null,
   view: 'three-quarter',
   roomView: false,
+  roomFraming: 'piece',
   formTab: 'piece',
 
   load: (designId, revision, spec) =>
@@ -105,5 +109,6 @@ export const useEditorStore = create<EditorState>()((set) => ({
   setCutaway: (cutaway) => set({ cutaway }),
   setView: (view) => set({ view }),
   setRoomView: (roomView) => set({ roomView }),
+  setRoomFraming: (roomFraming) => set({ roomFraming }),
   setFormTab: (formTab) => set({ formTab }),
 }));

@@ -162,6 +162,15 @@ describe('room fit in the design editor', { timeout: 300_000 }, () => {
     expect(room.inked).toBeGreaterThan(0.05);
     expect(room.red).toBeGreaterThan(0.0005);
     await shot('room-fit-collision');
+    // The piece is framed with the room around it; the whole room shows the same collision smaller.
+    await page.getByRole('button', { name: 'Whole room', exact: true }).click();
+    await settle();
+    const whole = await look();
+    expect(whole.red).toBeGreaterThan(0);
+    expect(whole.red).toBeLessThan(room.red);
+    await shot('room-fit-whole-room');
+    await page.getByRole('button', { name: 'Whole room', exact: true }).click();
+    await settle();
   });
 
   it('proposes the largest size that clears the sill and applies it as a new revision', async () => {

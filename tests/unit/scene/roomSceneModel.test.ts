@@ -5,7 +5,7 @@ import { fitRoom } from '../../../shared/room/fitRoom.ts';
 import { parseRoomSection } from '../../../shared/room/parseRoom.ts';
 import { envelopeFromResult } from '../../../shared/room/pieceEnvelope.ts';
 import { pieceBoxToRoom } from '../../../shared/room/roomFrame.ts';
-import { placeInRoom } from '../../../src/scene/roomSceneModel.ts';
+import { placeInRoom, ROOM_FOCUS_MARGIN_MM, roomFocusBox } from '../../../src/scene/roomSceneModel.ts';
 import { sceneModel } from '../../../src/scene/sceneModel.ts';
 
 /** Room placements are sums of mm values and 90° turns; a micrometre is far past rounding. */
@@ -49,5 +49,38 @@ describe('placeInRoom', () => {
     const lidPart = result.parts.find((p) => p.role === 'lid')!;
     expect(placed.collidingPartIds.has(lidPart.id)).toBe(true);
     expect([...placed.collidingSolidIds].some((id) => id.startsWith('sill'))).toBe(true);
+  });
+});
+
+describe('roomFocusBox', () => {
+  const focus = roomFocusBox(placed, fit.scene);
+  const roomBox = fit.scene.roomBox;
+
+  it('frames less than the whole room: the opened piece and what is around it', () => {
+    const extent = (b: typeof roomBox, k: number) => b.max[k]! - b.min[k]!;
+    expect(extent(focus, 0)).toBeLessThan(extent(roomBox, 0));
+    expect(extent(focus, 1)).toBeLessThan(extent(roomBox, 1));
+  });
+
+  it('holds every placed part, the open lid included, with the margin around them inside the room', () => {
+    for (const mesh of placed.meshes) {
+      for (let k = 0; k < 3; k++) {
+        expect(mesh.worldBox.min[k]!).toBeGreaterThanOrEqual(focus.min[k]! - TOLERANCE_MM);
+        expect(mesh.worldBox.max[k]!).toBeLessThanOrEqual(focus.max[k]! + TOLERANCE_MM);
+      }
+    }
+    for (let k = 0; k < 3; k++) {
+      expect(focus.min[k]!).toBeGreaterThanOrEqual(roomBox.min[k]! - TOLERANCE_MM);
+      expect(focus.max[k]!).toBeLessThanOrEqual(roomBox.max[k]! + TOLERANCE_MM);
+    }
+    // Stands on the floor, so the view keeps the floor under the piece.
+    expect(focus.min[2]).toBe(roomBox.min[2]);
+    const pieceTop = Math.max(...placed.meshes.map((m) => m.worldBox.max[2]!));
+    expect(focus.max[2]).toBeCloseTo(Math.min(roomBox.max[2]!, pieceTop + ROOM_FOCUS_MARGIN_MM), 6);
+  });
+
+  it('takes in the place the lid meets the sill', () => {
+    const overlaps = fit.scene.collisions.flatMap((c) => (c.overlapMm ? [c.overlapMm] : []));
+    for (const box of overlaps) for (let k = 0; k < 3; k++) expect(box.max[k]!).toBeLessThanOrEqual(focus.max[k]! + TOLERANCE_MM);
   });
 });
