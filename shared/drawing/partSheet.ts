@@ -26,6 +26,8 @@ const TABLE_ROW_MM = 4.6;
 const TABLE_EXTRA_MM = 22;
 /** Narrowest column the cut table may be given beside the views, mm. */
 const SIDE_TABLE_MIN_MM = 100;
+/** The cut table's columns. */
+const TABLE_HEAD: readonly string[] = ['Cut', 'Where', 'Sizes', 'For'];
 /** Fewest like holes or slots listed as one row of the cut table. */
 const HOLE_GROUP_MIN = 3;
 
@@ -129,27 +131,65 @@ function detailBlock(details: readonly JointDetail[], maxW: number): { views: Pl
 
 const moved = (views: readonly PlacedView[], frame: Rect, x: number, y: number): PlacedView[] => centreIn(views, frame, { x, y, w: frame.w, h: frame.h }, true);
 
+/** Average advance of the cut table's sans text (7.5 pt), mm: about half an em. */
+const TABLE_CHAR_MM = 1.35;
+/** Height each further line of a wrapped cell adds to its row, mm (7.5 pt at 1.15 leading). */
+const TABLE_LINE_MM = 3.1;
+/** Padding either side of a cell's text, mm. */
+const TABLE_CELL_PAD_MM = 2;
+
+/**
+ * Height the cut table `rows` (under `head`) needs at `widthMm`, mm. The table gives each column
+ * a width in proportion to its longest text, so a cell wraps onto as many lines as its text
+ * is longer than that share.
+ */
+function tableNeedMm(head: readonly string[], rows: readonly (readonly string[])[], widthMm: number): number {
+  if (!rows.length) return 0;
+  const longest = head.map((h, c) => Math.max(h.length, ...rows.map((r) => (r[c] ?? '').length)));
+  const total = longest.reduce((a, b) => a + b, 0);
+  const textW = Math.max(10, widthMm - head.length * TABLE_CELL_PAD_MM);
+  const lines = (row: readonly string[]): number => Math.max(1, ...row.map((cell, c) => {
+    const colW = Math.max(8, (textW * longest[c]!) / total);
+    return Math.ceil((cell.length * TABLE_CHAR_MM) / colW);
+  }));
+  return TABLE_EXTRA_MM + rows.reduce((h, r) => h + TABLE_ROW_MM + (lines(r) - 1) * TABLE_LINE_MM, 0);
+}
+
 /** A page layout: the views placed and where the cut table flows. */
 interface PageLayout {
   views: PlacedView[];
   flowArea: Rect;
   scale: number;
+  /** The whole cut table fits the page, none continued on another. */
+  whole: boolean;
+}
+
+/** The cut table: its header and rows, for estimating the room it takes. */
+interface CutTable {
+  head: readonly string[];
+  rows: readonly (readonly string[])[];
 }
 
 /**
  * Lays the page out in the ways that can work — table under the views (whole, or only its
- * start with the rest continued), or views on the left with the details and the table in a
- * column beside them — and keeps the one that draws the part largest. On a tie the whole
- * table under the views wins, then the column, then a table continued.
+ * start with the rest continued); views on the left with the details and the table in a column
+ * beside them; or views and details side by side with the table under both — and keeps the one
+ * that draws the part largest, except that a layout holding the whole table wins over one a
+ * usual scale larger that continues it on another sheet. On a tie the first tried wins.
  */
-function layoutPage(part: Part, units: DrawingUnits, area: Rect, flowNeed: number, joints: readonly JointDetail[]): PageLayout {
+function layoutPage(part: Part, units: DrawingUnits, area: Rect, table: CutTable, joints: readonly JointDetail[]): PageLayout {
   const marks = joints.map((d) => d.mark);
   const top = area.y + HEADING_MM;
   const fullH = area.y + area.h - top;
+  const need = (w: number): number => tableNeedMm(table.head, table.rows, w);
+  const flowNeed = need(area.w);
   const tableStart = flowNeed ? Math.min(flowNeed, TABLE_EXTRA_MM + 2 * TABLE_ROW_MM) : 0;
   const row = detailBlock(joints, area.w);
   const rowH = row ? row.frame.h + VIEW_GAP_MM : 0;
   const options: PageLayout[] = [];
+  const push = (views: PlacedView[], flowArea: Rect, scale: number, flowW: number): void => {
+    options.push({ views, flowArea, scale, whole: flowArea.h >= need(flowW) - 0.5 });
+  };
 
   const under = (viewsH: number): void => {
     const laid = partViewsFitting(part, units, { w: area.w, h: viewsH }, marks);
@@ -159,7 +199,7 @@ function layoutPage(part: Part, units: DrawingUnits, area: Rect, flowNeed: numbe
     const details = row ? moved(row.views, row.frame, used.x, used.y + used.h + VIEW_GAP_MM) : [];
     const bottom = rectUnion([...views, ...details].map((v) => v.frame));
     const flowTop = bottom.y + bottom.h + 4;
-    options.push({ views: [...views, ...details], flowArea: { x: area.x, y: flowTop, w: area.w, h: area.y + area.h - flowTop }, scale: laid.scale });
+    push([...views, ...details], { x: area.x, y: flowTop, w: area.w, h: area.y + area.h - flowTop }, laid.scale, area.w);
   };
   const beside = (columnW: number): void => {
     const column = detailBlock(joints, columnW);
@@ -170,7 +210,20 @@ function layoutPage(part: Part, units: DrawingUnits, area: Rect, flowNeed: numbe
     const columnX = area.x + laid.frame.w + VIEW_GAP_MM;
     const details = column ? moved(column.views, column.frame, columnX, top) : [];
     const flowTop = column ? top + column.frame.h + 4 : top;
-    options.push({ views: [...views, ...details], flowArea: { x: columnX, y: flowTop, w: area.x + area.w - columnX, h: area.y + area.h - flowTop }, scale: laid.scale });
+    const flowW = area.x + area.w - columnX;
+    push([...views, ...details], { x: columnX, y: flowTop, w: flowW, h: area.y + area.h - flowTop }, laid.scale, flowW);
+  };
+  const detailsBeside = (columnW: number): void => {
+    const column = detailBlock(joints, columnW);
+    const viewsH = fullH - flowNeed;
+    if (!column || column.frame.h > viewsH) return;
+    const laid = partViewsFitting(part, units, { w: area.w - columnW - VIEW_GAP_MM, h: viewsH }, marks);
+    if (!laid) return;
+    const views = moved(laid.views, laid.frame, area.x, top);
+    const details = moved(column.views, column.frame, area.x + laid.frame.w + VIEW_GAP_MM, top);
+    const bottom = rectUnion([...views, ...details].map((v) => v.frame));
+    const flowTop = bottom.y + bottom.h + 4;
+    push([...views, ...details], { x: area.x, y: flowTop, w: area.w, h: area.y + area.h - flowTop }, laid.scale, area.w);
   };
 
   under(Math.max(fullH * PART_VIEWS_MIN_SHARE, fullH - flowNeed) - rowH);
@@ -179,9 +232,17 @@ function layoutPage(part: Part, units: DrawingUnits, area: Rect, flowNeed: numbe
     const oneAcross = Math.max(SIDE_TABLE_MIN_MM, widths[0] ?? 0);
     const twoAcross = Math.max(SIDE_TABLE_MIN_MM, (widths[0] ?? 0) + (widths[1] ?? 0) + VIEW_GAP_MM);
     for (const w of new Set([oneAcross, twoAcross])) if (w <= area.w * 0.5) beside(w);
+    if (widths.length) for (const w of new Set([widths[0]!, (widths[0] ?? 0) + (widths[1] ?? 0) + VIEW_GAP_MM])) if (w <= area.w * 0.5) detailsBeside(w);
   }
   under(fullH - rowH - tableStart);
-  if (options.length) return options.reduce((best, o) => (o.scale < best.scale ? o : best));
+  if (options.length) {
+    const scales = usualScales(units);
+    const rank = (o: PageLayout): number => scales.indexOf(o.scale);
+    const best = options.reduce((b, o) => (o.scale < b.scale ? o : b));
+    const wholes = options.filter((o) => o.whole);
+    const bestWhole = wholes.length ? wholes.reduce((b, o) => (o.scale < b.scale ? o : b)) : null;
+    return bestWhole && rank(bestWhole) - rank(best) <= 1 ? bestWhole : best;
+  }
   // Nothing fits with the table: the views and details take the page; the table follows on the next.
   const laid = partViewsFitting(part, units, { w: area.w, h: fullH - rowH }, marks) ?? partViewsSmallest(part, units, marks);
   const views = centreIn(laid.views, laid.frame, { x: area.x, y: top, w: area.w, h: fullH }, true);
@@ -189,20 +250,30 @@ function layoutPage(part: Part, units: DrawingUnits, area: Rect, flowNeed: numbe
   const details = row ? moved(row.views, row.frame, used.x, used.y + used.h + VIEW_GAP_MM) : [];
   const bottom = rectUnion([...views, ...details].map((v) => v.frame));
   const flowTop = bottom.y + bottom.h + 4;
-  return { views: [...views, ...details], flowArea: { x: area.x, y: flowTop, w: area.w, h: area.y + area.h - flowTop }, scale: laid.scale };
+  return { views: [...views, ...details], flowArea: { x: area.x, y: flowTop, w: area.w, h: area.y + area.h - flowTop }, scale: laid.scale, whole: false };
 }
 
 /** The drawing sheet of `part`, lettered `letter`. */
 export function partSheet(part: Part, letter: string, spec: SheetSpec, units: DrawingUnits): Omit<Sheet, 'number'> {
   const area = drawingArea(spec);
   const rows = cutRows(part, units);
-  // The views get what the cut table and notes leave, so the page holds both without a continuation.
-  const flowNeed = rows.length ? TABLE_EXTRA_MM + rows.length * TABLE_ROW_MM : 0;
-  // First without details, to learn the part's scale; then the cuts too small at that scale get details.
-  const plain = layoutPage(part, units, area, flowNeed, []);
-  const scaleOf = (id: string) => plain.views.find((v) => v.id === id)?.scale ?? plain.scale;
-  const details = jointDetails(part, units, { face: scaleOf('face'), edge: scaleOf('edge'), end: scaleOf('end') });
-  const page = details.length ? layoutPage(part, units, area, flowNeed, details) : plain;
+  const table: CutTable = { head: TABLE_HEAD, rows };
+  // First without details, to learn the part's scale; then the cuts too small at that scale get
+  // details. Details take room, so the scale may then drop: once more with the cuts too small at it.
+  const plain = layoutPage(part, units, area, table, []);
+  const scalesOf = (page: PageLayout): Record<'face' | 'edge' | 'end', number> => {
+    const of = (id: string) => page.views.find((v) => v.id === id)?.scale ?? page.scale;
+    return { face: of('face'), edge: of('edge'), end: of('end') };
+  };
+  let details = jointDetails(part, units, scalesOf(plain));
+  let page = details.length ? layoutPage(part, units, area, table, details) : plain;
+  if (details.length) {
+    const again = jointDetails(part, units, scalesOf(page));
+    if (again.length !== details.length) {
+      details = again;
+      page = layoutPage(part, units, area, table, details);
+    }
+  }
 
   const material = part.material.kind === 'solid' ? part.material.speciesName : part.material.sheetName;
   const grain = part.grain === 'length' ? 'grain along the length' : part.grain === 'width' ? 'grain across the width' : 'sheet good';
@@ -213,7 +284,7 @@ export function partSheet(part: Part, letter: string, spec: SheetSpec, units: Dr
     { type: 'label', at: [area.x, area.y + 10.5], text: `${part.quantity} off   finished ${partSizeText(part, units)}   ${material}, ${grain}${part.glueUp ? `, glued up from ${part.glueUp.boards} boards` : ''}`, sizePt: 8.5, anchor: 'start', font: 'mono' },
     { type: 'label', at: [area.x, area.y + 14.5], text: part.notes.length ? `Notes: ${part.notes.map((n) => n.replace(/\.$/, '')).join('; ')}.  ${key}` : key, sizePt: 6.5, anchor: 'start', font: 'sans' },
   ];
-  const flow: FlowBlock[] = rows.length ? [{ type: 'table', title: 'Cuts on this part', head: ['Cut', 'Where', 'Sizes', 'For'], rows, numericColumns: [] }] : [];
+  const flow: FlowBlock[] = rows.length ? [{ type: 'table', title: 'Cuts on this part', head: TABLE_HEAD, rows, numericColumns: [] }] : [];
   const { widthMm, heightMm } = sheetSizeMm(spec);
   return { name: `Part ${letter}: ${part.name}`, widthMm, heightMm, views: page.views, flow, primitives: heading, flowArea: page.flowArea };
 }

@@ -5,7 +5,7 @@
  * next, and the part's finished length, width and thickness outermost.
  */
 import type { Box3, Feature, Part } from '../engine/types.ts';
-import { applyBreak, chooseBreak } from './breakView.ts';
+import { applyBreaks, chooseBreaks } from './breakView.ts';
 import { dimension } from './chain.ts';
 import { markPrimitives, type DetailMark } from './jointDetails.ts';
 import { lengthText, type DrawingUnits } from './lengthText.ts';
@@ -276,7 +276,7 @@ export function partViews(part: Part, units: DrawingUnits, up: FaceUp = chooseFa
   dims.add(2, 1, 0, size[2], whole, 2, { overall: true });
 
   const stationsX = [...grid.breaks[0], ...part.features.flatMap((f) => (f.type === 'hole' || f.type === 'slot' ? f.removed.flatMap((b) => [b.min[0], b.max[0]]) : []))];
-  const cut = chooseBreak(size[0], Math.max(size[1], size[2]), stationsX);
+  const cuts = chooseBreaks(size[0], Math.max(size[1], size[2]), stationsX);
   const out = {} as Record<PartViewId, ModelView>;
   for (const id of ['face', 'edge', 'end'] as const) {
     const va = axes[id];
@@ -290,7 +290,7 @@ export function partViews(part: Part, units: DrawingUnits, up: FaceUp = chooseFa
       bounds: { x: 0, y: 0, w: size[va.u.axis], h: size[va.v.axis] },
     };
     // Face and edge views run along the length (u is local x), so a break shortens both alike.
-    out[id] = cut && va.u.axis === 0 ? applyBreak(view, cut) : view;
+    out[id] = va.u.axis === 0 ? applyBreaks(view, cuts) : view;
   }
   return out;
 }
