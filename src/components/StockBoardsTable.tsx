@@ -76,7 +76,7 @@ export function StockBoardsTable({ boards, onChange, newBoard, usage, problems, 
                   <tr className={`border-t border-rule ${bad.length ? 'bg-pencil-soft/40' : ''}`} data-board-row={n}>
                     <td className="dim px-2 py-1 align-top text-graphite-soft">{n}</td>
                     <td className="px-1 py-0.5 align-top">
-                      <input className="field w-24 font-sans" aria-label={`Board ${n} label`} placeholder="e.g. A1" maxLength={MAX_LABEL_CHARS} value={board.label ?? ''}
+                      <input className="field w-36 font-sans" aria-label={`Board ${n} label`} placeholder="e.g. A1" maxLength={MAX_LABEL_CHARS} value={board.label ?? ''}
                         onChange={(e) => setBoard(i, { label: e.target.value })} />
                     </td>
                     <td className="px-1 py-0.5 align-top">

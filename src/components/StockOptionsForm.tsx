@@ -12,7 +12,8 @@ import { LengthListInput } from './LengthListInput.tsx';
 export function StockOptionsForm({ settings, onChange, sheetIds, readOnly = false }: { settings: StockSettings; onChange: (next: StockSettings) => void; sheetIds: readonly string[]; readOnly?: boolean }) {
   const set = (patch: Partial<StockSettings>) => onChange({ ...settings, ...patch });
   const setOffcut = (i: number, patch: Partial<OffcutStock>) => set({ offcuts: settings.offcuts.map((o, j) => (j === i ? { ...o, ...patch } : o)) });
-  const offcutChoices = sheetIds.length > 0 ? sheetIds : SHEET_GOOD_IDS;
+  // The stock is the workshop's, not the design's: every sheet good, this design's first.
+  const offcutChoices = [...sheetIds, ...SHEET_GOOD_IDS.filter((id) => !sheetIds.includes(id))];
   return (
     <form aria-label="Stock" onSubmit={(e) => e.preventDefault()}>
       <fieldset disabled={readOnly} className="grid gap-3 text-sm">
@@ -25,8 +26,8 @@ export function StockOptionsForm({ settings, onChange, sheetIds, readOnly = fals
           <legend className="mb-1 text-xs font-semibold uppercase tracking-widest text-graphite-soft">Offcuts in stock (used first)</legend>
           {settings.offcuts.length === 0 && <p className="text-xs text-graphite-faint">None.</p>}
           {settings.offcuts.map((o, i) => (
-            <div key={i} className="mb-1 grid grid-cols-[1fr_5.5rem_5.5rem_3.5rem_auto] items-end gap-1" data-offcut={i}>
-              <label className="text-xs text-graphite-soft">
+            <div key={i} className="mb-2 grid grid-cols-[1fr_1fr_3.5rem_auto] items-end gap-1 border-l-2 border-rule pl-2" data-offcut={i}>
+              <label className="col-span-4 text-xs text-graphite-soft">
                 Sheet good
                 <select className="field font-sans" value={o.sheetId} onChange={(e) => setOffcut(i, { sheetId: e.target.value })}>
                   {offcutChoices.map((id) => <option key={id} value={id}>{SHEET_GOODS[id as keyof typeof SHEET_GOODS]?.name ?? id}</option>)}

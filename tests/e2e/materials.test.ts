@@ -14,7 +14,7 @@ import type { PieceSpec } from '../../shared/engine/types.ts';
 import { costOf } from '../../shared/materials/cost.ts';
 import { centsText } from '../../shared/materials/money.ts';
 import { parsePriceListCsv } from '../../shared/materials/priceListCsv.ts';
-import { DEFAULT_STOCK_SETTINGS, takeoffOptionsFor } from '../../shared/materials/stockSettings.ts';
+import { takeoffOptionsFor, type StockSettings } from '../../shared/materials/stockSettings.ts';
 import { materialsTakeoff } from '../../shared/materials/takeoff.ts';
 import { DEMO_PRICE_LIST } from '../../server/db/demoPriceList.ts';
 import { seedDemo } from '../../server/db/seed.ts';
@@ -47,7 +47,7 @@ afterAll(async () => {
 
 const shot = (name: string, fullPage = false) => page.screenshot({ path: join(SCREENSHOT_DIR, `${name}.png`), fullPage });
 
-async function chest(): Promise<{ id: string; workshopId: string; spec: PieceSpec }> {
+async function chest(): Promise<{ id: string; workshopId: string; spec: PieceSpec; stock: StockSettings }> {
   return page.evaluate(async (title) => {
     const get = async (path: string) => (await fetch(path, { headers: { Accept: 'application/json' } })).json();
     const me = await get('/api/auth/me');
@@ -55,7 +55,8 @@ async function chest(): Promise<{ id: string; workshopId: string; spec: PieceSpe
     const list = await get(`/api/workshops/${workshopId}/designs?kind=chest`);
     const id = list.designs.find((d: { title: string }) => d.title === title).id;
     const detail = await get(`/api/designs/${id}`);
-    return { id, workshopId, spec: detail.headRevision.spec };
+    const { stock } = await get(`/api/workshops/${workshopId}/stock`);
+    return { id, workshopId, spec: detail.headRevision.spec, stock };
   }, CHEST_TITLE);
 }
 
@@ -66,12 +67,13 @@ describe('Materials page', () => {
     await page.getByLabel('Password').fill(demo.password);
     await page.getByRole('button', { name: 'Sign in' }).click();
     await page.getByRole('button', { name: 'Sign out' }).waitFor();
-    const { id, spec } = await chest();
+    const { id, spec, stock } = await chest();
     await page.goto(`${server.url}/designs/${id}/materials`);
     await page.locator('figure.sheet-diagram').first().waitFor();
 
     const result = buildPiece(validateSpec(spec));
-    const expected = materialsTakeoff(result, takeoffOptionsFor(DEFAULT_STOCK_SETTINGS));
+    // The workshop's own stock (the demo's boards on hand and offcut), as the page lays out on.
+    const expected = materialsTakeoff(result, takeoffOptionsFor(stock));
     const sheetParts = expected.sheets.flatMap((s) => s.layout.sheets.flatMap((p) => p.parts.map((x) => x.name)));
     const drawn = await page.locator('figure.sheet-diagram [data-part]').evaluateAll((els) => els.map((e) => e.getAttribute('data-part')));
     expect(drawn.sort()).toEqual(sheetParts.sort());
@@ -96,11 +98,11 @@ describe('Materials page', () => {
       });
       observer.observe(document.body, { childList: true, subtree: true });
     });
-    await page.getByLabel('Effort').selectOption('thorough');
+    await page.getByLabel('Layout effort').selectOption('thorough');
     await page.getByText('Stopped early: these are the best layouts found before you cancelled.').waitFor();
     expect(await page.locator('figure.sheet-diagram').count()).toBeGreaterThan(0);
     await shot('materials-cancelled');
-    await page.getByLabel('Effort').selectOption('standard');
+    await page.getByLabel('Layout effort').selectOption('standard');
     await page.getByText('Stopped early: these are the best layouts').waitFor({ state: 'detached' });
   });
 
@@ -122,8 +124,8 @@ describe('Materials page', () => {
   it('replaces the price list from a good CSV and shows the cost from it', async () => {
     await page.getByLabel('Upload a price list CSV').setInputFiles({ name: 'prices.csv', mimeType: 'text/csv', buffer: Buffer.from(GOOD_CSV) });
     await page.getByText('Saved 3 prices from prices.csv.').waitFor();
-    const { spec } = await chest();
-    const takeoff = materialsTakeoff(buildPiece(validateSpec(spec)), takeoffOptionsFor(DEFAULT_STOCK_SETTINGS));
+    const { spec, stock } = await chest();
+    const takeoff = materialsTakeoff(buildPiece(validateSpec(spec)), takeoffOptionsFor(stock));
     const parsed = parsePriceListCsv(GOOD_CSV);
     if (!parsed.ok) throw new Error('the test CSV must be good');
     const cost = costOf(takeoff, parsed.priceList);
