@@ -3,3 +3,4 @@ export * from './length.ts';
 export * from './parse.ts';
 export * from './format.ts';
 export * from './dual.ts';
+export * from './feetInches.ts';

@@ -1,7 +1,7 @@
 import type { RoomCheck } from '../../shared/room/roomCheck.ts';
 import { checkNumber } from '../editor/checkNumbers.ts';
 import { lengthsInUserUnits } from '../editor/roomText.ts';
-import { useLength } from '../state/useLength.ts';
+import { useRoomLength } from '../state/useRoomLength.ts';
 
 const VERDICT = {
   fails: { label: 'Fails', cls: 'bg-pencil text-sheet', order: 0 },
@@ -34,7 +34,7 @@ function verdictOf(check: RoomCheck): keyof typeof VERDICT {
 
 /** Every room-fit check, failures first: the verdict, what was found, the numbers in the maker's unit, and the fix. */
 export function RoomChecksList({ checks }: { checks: readonly RoomCheck[] }) {
-  const length = useLength();
+  const length = useRoomLength();
   const sorted = [...checks].sort((a, b) => VERDICT[verdictOf(a)].order - VERDICT[verdictOf(b)].order);
   return (
     <ul className="divide-y divide-rule/70" aria-label="Room-fit checks">

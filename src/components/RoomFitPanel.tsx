@@ -2,7 +2,7 @@ import type { PieceResult, PieceSpec } from '../../shared/engine/types.ts';
 import { roomFitOutcome } from '../editor/roomFitOutcome.ts';
 import { lengthsInUserUnits } from '../editor/roomText.ts';
 import { useEditorStore } from '../state/useEditorStore.ts';
-import { useLength } from '../state/useLength.ts';
+import { useRoomLength } from '../state/useRoomLength.ts';
 import { NicheFitPanel } from './NicheFitPanel.tsx';
 import { RoomChecksList } from './RoomChecksList.tsx';
 
@@ -18,7 +18,7 @@ interface Props {
  * what was assumed about the piece, the way to the 3D room view, and fit to the niche.
  */
 export function RoomFitPanel({ result, spec, design, canEdit }: Props) {
-  const length = useLength();
+  const length = useRoomLength();
   const roomView = useEditorStore((s) => s.roomView);
   const { setRoomView, setFormTab } = useEditorStore.getState();
   const outcome = roomFitOutcome(spec.room, result);

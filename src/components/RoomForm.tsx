@@ -5,7 +5,7 @@ import { newDoor, newObstacle, newRoom, newWindow } from '../editor/roomDefaults
 import type { RoomFormState } from '../editor/roomForm.ts';
 import { valueAt, withValueAt, type RoomPath } from '../editor/roomPath.ts';
 import { useEditorStore } from '../state/useEditorStore.ts';
-import { useLength } from '../state/useLength.ts';
+import { useRoomLength } from '../state/useRoomLength.ts';
 import { RoomChoiceField } from './RoomChoiceField.tsx';
 import { RoomLengthField } from './RoomLengthField.tsx';
 import { RoomTextField } from './RoomTextField.tsx';
@@ -29,7 +29,7 @@ const rowsAt = (room: unknown, key: string): Row[] => {
  */
 export function RoomForm({ state, placedLeftMm }: { state: RoomFormState; placedLeftMm: number | null }) {
   const setRoom = useEditorStore((s) => s.setRoom);
-  const length = useLength();
+  const length = useRoomLength();
   const { room, readOnly } = state;
 
   if (room === undefined) {

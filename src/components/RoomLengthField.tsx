@@ -1,13 +1,12 @@
 import { useState } from 'react';
 import { isInputError } from '../../shared/errors.ts';
-import { formatLength, parseLength } from '../../shared/units/index.ts';
-import { lengthFormat } from '../editor/displayUnits.ts';
+import { parseLength } from '../../shared/units/index.ts';
 import { roomFieldProblem } from '../editor/roomFieldProblem.ts';
 import { roomFieldId, storedProblemAt, type RoomFormState } from '../editor/roomForm.ts';
 import { pathText, valueAt, withValueAt, type RoomPath } from '../editor/roomPath.ts';
 import { lengthsInUserUnits } from '../editor/roomText.ts';
 import { useEditorStore } from '../state/useEditorStore.ts';
-import { useLength } from '../state/useLength.ts';
+import { useRoomLength } from '../state/useRoomLength.ts';
 import { useDisplayUnits } from '../state/usePreferences.ts';
 
 interface Props {
@@ -20,13 +19,13 @@ interface Props {
 }
 
 /**
- * One length of the room, typed as in the parameter form (`12'`, `1 3/4"`, `44.5 mm`; a bare
- * number in the maker's unit). A good value goes into the room at once; a bad one stays in the
+ * One length of the room, typed as in the parameter form (`12' 6-1/2"`, `1 3/4"`, `44.5 mm`; a
+ * bare number in the maker's unit) and written back in feet and inches when the maker reads inches. A good value goes into the room at once; a bad one stays in the
  * field, marked, with its reason, and never reaches the checks.
  */
 export function RoomLengthField({ state, path, label, optional, hint }: Props) {
   const units = useDisplayUnits();
-  const length = useLength();
+  const length = useRoomLength();
   const setRoom = useEditorStore((s) => s.setRoom);
   const sealStep = useEditorStore((s) => s.sealStep);
   const value = valueAt(state.room, path);
@@ -34,7 +33,7 @@ export function RoomLengthField({ state, path, label, optional, hint }: Props) {
   const live = draft && draft.forValue === value ? draft : null;
   const problem = live?.problem ?? storedProblemAt(state, path);
   const id = roomFieldId(path);
-  const shown = typeof value === 'number' ? formatLength(value, lengthFormat(units)) : typeof value === 'string' ? value : '';
+  const shown = typeof value === 'number' ? length(value) : typeof value === 'string' ? value : '';
 
   const onText = (text: string) => {
     let next: number | undefined;
