@@ -108,6 +108,23 @@ describe('workshop stock', () => {
   });
 });
 
+describe('workshop stock text and types', () => {
+  it('keeps a label of SQL or markup as plain text and returns it verbatim', async () => {
+    const label = "Robert'); DROP TABLE workshop_stock; --<b>";
+    const board = { ...STOCK.boardsInStock[0]!, label: label.slice(0, 60) };
+    const res = await shop.designer.put(path, { ...STOCK, boardsInStock: [board] });
+    expect(res.status).toBe(200);
+    expect((await shop.reviewer.get(path)).body.stock.boardsInStock[0].label).toBe(label.slice(0, 60));
+    await shop.owner.put(path, STOCK);
+  });
+
+  it('names a length sent as text instead of millimetres (400)', async () => {
+    const res = await shop.owner.put(path, { ...STOCK, kerfMm: '1/8"' });
+    expect(res.status).toBe(400);
+    expect(res.body.error.details[0]).toEqual({ path: 'kerfMm', message: 'must be a number (millimetres)' });
+  });
+});
+
 describe('the demo stock', () => {
   it('is seeded for the demo workshop once, and a second seed keeps a member\'s edits', async () => {
     await seedDemo(api.sequelize);
