@@ -2,6 +2,7 @@ import type { Check, Part, Severity } from '../../shared/engine/types.ts';
 import { checkNumber } from '../editor/checkNumbers.ts';
 import { useLength } from '../state/useLength.ts';
 import { useEditorStore } from '../state/useEditorStore.ts';
+import { CheckRow } from './CheckRow.tsx';
 
 const SEVERITY: Record<Severity, { label: string; cls: string; order: number }> = {
   error: { label: 'Error', cls: 'bg-pencil text-sheet', order: 0 },
@@ -24,49 +25,34 @@ export function ChecksList({ checks, parts, empty }: { checks: readonly Check[];
       {sorted.map((check) => {
         const involved = check.partIds.includes(selected ?? '');
         return (
-          <li key={check.id} data-check={check.id} className={`grid grid-cols-[5.5rem_1fr] gap-3 px-3 py-2 ${involved ? 'bg-pencil-soft/40' : ''}`}>
-            <span className={`h-fit rounded-sm px-1.5 py-0.5 text-center text-[11px] font-semibold uppercase tracking-wider ${SEVERITY[check.severity].cls}`}>{SEVERITY[check.severity].label}</span>
-            <div className="min-w-0 text-[13px]">
-              <p className="font-semibold">{check.title}</p>
-              <p className="text-graphite">{check.message}</p>
-              {Object.keys(check.numbers).length > 0 && (
-                <dl className="mt-1 flex flex-wrap gap-x-4 gap-y-0.5 text-xs">
-                  {Object.entries(check.numbers).map(([key, value]) => {
-                    const n = checkNumber(key, value, length);
-                    return (
-                      <div key={key} className="flex gap-1">
-                        <dt className="text-graphite-soft">{n.label}</dt>
-                        <dd className="dim">{n.text}</dd>
-                      </div>
-                    );
-                  })}
-                </dl>
-              )}
-              {check.fix && (
-                <p className="mt-1 text-xs">
-                  <span className="font-semibold text-ok">Fix: </span>
-                  {check.fix}
-                </p>
-              )}
-              {check.partIds.length > 0 && (
-                <p className="mt-1 flex flex-wrap gap-1">
-                  {check.partIds.map((id) => (
-                    <button
-                      key={id}
-                      type="button"
-                      className={`rounded-sm border px-1.5 py-0.5 text-[11px] ${selected === id ? 'border-pencil bg-pencil text-sheet' : 'border-rule bg-sheet hover:border-pencil hover:text-pencil'}`}
-                      aria-pressed={selected === id}
-                      onClick={() => select(selected === id ? null : id)}
-                      onMouseEnter={() => hover(id)}
-                      onMouseLeave={() => hover(null)}
-                    >
-                      {names.get(id) ?? id}
-                    </button>
-                  ))}
-                </p>
-              )}
-            </div>
-          </li>
+          <CheckRow
+            key={check.id}
+            data={{ 'data-check': check.id }}
+            badge={SEVERITY[check.severity]}
+            title={check.title}
+            message={check.message}
+            numbers={Object.entries(check.numbers).map(([key, value]) => ({ key, ...checkNumber(key, value, length) }))}
+            fix={check.fix}
+            highlighted={involved}
+          >
+            {check.partIds.length > 0 && (
+              <p className="mt-1 flex flex-wrap gap-1">
+                {check.partIds.map((id) => (
+                  <button
+                    key={id}
+                    type="button"
+                    className={`rounded-sm border px-1.5 py-0.5 text-[11px] ${selected === id ? 'border-pencil bg-pencil text-sheet' : 'border-rule bg-sheet hover:border-pencil hover:text-pencil'}`}
+                    aria-pressed={selected === id}
+                    onClick={() => select(selected === id ? null : id)}
+                    onMouseEnter={() => hover(id)}
+                    onMouseLeave={() => hover(null)}
+                  >
+                    {names.get(id) ?? id}
+                  </button>
+                ))}
+              </p>
+            )}
+          </CheckRow>
         );
       })}
     </ul>

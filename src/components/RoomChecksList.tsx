@@ -2,6 +2,7 @@ import type { RoomCheck } from '../../shared/room/roomCheck.ts';
 import { checkNumber } from '../editor/checkNumbers.ts';
 import { lengthsInUserUnits } from '../editor/roomText.ts';
 import { useRoomLength } from '../state/useRoomLength.ts';
+import { CheckRow } from './CheckRow.tsx';
 
 const VERDICT = {
   fails: { label: 'Fails', cls: 'bg-pencil text-sheet', order: 0 },
@@ -41,32 +42,19 @@ export function RoomChecksList({ checks }: { checks: readonly RoomCheck[] }) {
       {sorted.map((check) => {
         const verdict = VERDICT[verdictOf(check)];
         return (
-          <li key={check.id} data-room-check={check.id} data-passed={check.passed} className="grid grid-cols-[5.5rem_1fr] gap-3 px-3 py-2">
-            <span className={`h-fit rounded-sm px-1.5 py-0.5 text-center text-[11px] font-semibold uppercase tracking-wider ${verdict.cls}`}>{verdict.label}</span>
-            <div className="min-w-0 text-[13px]">
-              <p className="font-semibold">{check.title}</p>
-              <p className="text-graphite">{lengthsInUserUnits(check.message, length)}</p>
-              {!check.passed && Object.keys(check.numbers).length > 0 && (
-                <dl className="mt-1 flex flex-wrap gap-x-4 gap-y-0.5 text-xs">
-                  {Object.entries(check.numbers).map(([key, value]) => {
-                    const n = checkNumber(key, value, length);
-                    return (
-                      <div key={key} className="flex gap-1">
-                        <dt className="text-graphite-soft">{LABELS[key] ?? n.label}</dt>
-                        <dd className="dim">{n.text}</dd>
-                      </div>
-                    );
-                  })}
-                </dl>
-              )}
-              {check.fix && (
-                <p className="mt-1 text-xs">
-                  <span className="font-semibold text-ok">Fix: </span>
-                  {lengthsInUserUnits(check.fix, length)}
-                </p>
-              )}
-            </div>
-          </li>
+          <CheckRow
+            key={check.id}
+            data={{ 'data-room-check': check.id, 'data-passed': check.passed }}
+            badge={verdict}
+            title={check.title}
+            message={lengthsInUserUnits(check.message, length)}
+            // A passing check's numbers only repeat what passed; they are shown when it does not.
+            numbers={check.passed ? [] : Object.entries(check.numbers).map(([key, value]) => {
+              const n = checkNumber(key, value, length);
+              return { key, label: LABELS[key] ?? n.label, text: n.text };
+            })}
+            fix={check.fix ? lengthsInUserUnits(check.fix, length) : null}
+          />
         );
       })}
     </ul>
