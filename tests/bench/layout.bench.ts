@@ -14,7 +14,7 @@
  */
 import { readFileSync } from 'node:fs';
 import { MaxRectsPacker, PACKING_LOGIC } from 'maxrects-packer/dist/maxrects-packer.mjs';
-import { buildPiece, type PieceSpec } from '../../shared/engine/index.ts';
+import { buildPiece, defaultSpec, type PieceSpec } from '../../shared/engine/index.ts';
 import { binPackingInstance, CLASS_NAMES, type BinPackingClass } from '../../shared/layout/binPackingClasses.ts';
 import { layoutSheets } from '../../shared/layout/sheetOptimiser.ts';
 import { DEFAULT_KERF_MM, DEFAULT_TRIM_MM, STANDARD_SHEET } from '../../shared/layout/sheetInput.ts';
@@ -79,6 +79,19 @@ export async function benchLayout(): Promise<string> {
     }
     for (const b of takeoff.boards) {
       lines.push(`  ${file} ${b.speciesName} ${b.quarters}/4: ${b.layout.boards.length} boards, ${b.layout.boardFeetBought.toFixed(2)} bd ft bought, ${b.layout.boardFeetRough.toFixed(2)} rough, ${b.layout.boardFeetFinished.toFixed(2)} finished`);
+    }
+  }
+  lines.push('', 'Default dresser, boards only: drawer fronts cut end to end per column (grain-matched runs), default boards and 10 ft × 12 in boards');
+  const dresser = buildPiece(defaultSpec('dresser'));
+  const wide = [{ id: 'wide', name: 'Board 10 ft × 12 in', lengthMm: 120 * 25.4, widthMm: 12 * 25.4, count: null, inStock: false, defects: [] }];
+  for (const [name, options] of [['default boards', {}], ['10 ft × 12 in', { boardStock: () => wide }]] as const) {
+    const runStart = performance.now();
+    const takeoff = materialsTakeoff(dresser, options);
+    const ms = performance.now() - runStart;
+    for (const b of takeoff.boards) {
+      const runs = new Set(b.layout.boards.flatMap((x) => x.parts.filter((p) => p.matchOrder !== null).map((p) => p.matchGroup)));
+      const split = b.layout.splitGroups.filter((g) => runs.has(g)).length;
+      lines.push(`  ${name} ${b.speciesName} ${b.quarters}/4: ${b.layout.boards.length} boards, ${b.layout.boardFeetBought.toFixed(2)} bd ft bought, runs ${runs.size - split} whole / ${split} split (whole takeoff ${ms.toFixed(0)} ms)`);
     }
   }
   lines.push('', `  total ${((performance.now() - started) / 1000).toFixed(1)} s`);
