@@ -24,9 +24,10 @@ export function cutListBlocks(result: PieceResult, units: DrawingUnits, letters:
       lengthText(r.finished[2], units),
       r.rough.map((v) => lengthText(v, units)).join(' × '),
       GRAIN_WORDS[r.grain],
-      r.notes.join('; '),
+      r.notes.map((n) => n.replace(/\.$/, '')).join('; '),
     ]),
     numericColumns: [2, 3, 4, 5, 6],
+    unbrokenColumns: [0, 1, 7],
     footnote: 'Finished sizes include tongues. Rough sizes add the milling allowances; solid stock is rounded up to the next quarter-inch thickness.',
   }));
 }

@@ -147,8 +147,10 @@ export interface TableBlock {
   title: string;
   head: readonly string[];
   rows: readonly (readonly string[])[];
-  /** Indexes of columns holding numbers or lengths: set in mono and right-aligned. */
+  /** Indexes of columns holding numbers or lengths: set in mono and right-aligned, never wrapped. */
   numericColumns: readonly number[];
+  /** Indexes of further columns never wrapped, e.g. part names a test or a maker reads whole. */
+  unbrokenColumns?: readonly number[];
   /** Optional line under the table, e.g. a source or an approximation note. */
   footnote?: string;
 }

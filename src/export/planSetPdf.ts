@@ -109,8 +109,10 @@ function drawTable(doc: jsPDF, block: TableBlock, y: number, area: Rect, page: R
   doc.setFontSize(10);
   doc.setTextColor(...rgb(PALETTE.ink));
   doc.text(winAnsi(block.title), area.x, y + 4);
-  const columnStyles: Record<number, { font: string; halign: 'right' }> = {};
-  for (const c of block.numericColumns) columnStyles[c] = { font: MONO, halign: 'right' };
+  // A length broken over two lines reads as two numbers: numbers and named columns keep to one line.
+  const columnStyles: Record<number, { font?: string; halign?: 'right'; cellWidth: 'wrap' }> = {};
+  for (const c of block.unbrokenColumns ?? []) columnStyles[c] = { cellWidth: 'wrap' };
+  for (const c of block.numericColumns) columnStyles[c] = { font: MONO, halign: 'right', cellWidth: 'wrap' };
   const startPage = doc.getNumberOfPages();
   autoTable(doc, {
     startY: y + 6,

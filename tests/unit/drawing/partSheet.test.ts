@@ -4,15 +4,17 @@ import { partLetters } from '../../../shared/drawing/partLetters.ts';
 import { partSheet } from '../../../shared/drawing/partSheet.ts';
 import { rectsOverlap, rectUnion } from '../../../shared/drawing/rects.ts';
 import type { Primitive, Rect, Sheet } from '../../../shared/drawing/types.ts';
+import type { Part } from '../../../shared/engine/types.ts';
 import { buildPiece, defaultSpec } from '../../../shared/engine/index.ts';
+import { definingSizes, writes } from './support/definingSizes.ts';
 
 const KINDS = ['chest', 'dresser', 'cabinet'] as const;
 
 /** Every part sheet of the default piece of `kind`, inch drawings on Letter landscape. */
-function sheetsOf(kind: (typeof KINDS)[number]): { partId: string; sheet: Omit<Sheet, 'number'> }[] {
+function sheetsOf(kind: (typeof KINDS)[number]): { partId: string; part: Part; sheet: Omit<Sheet, 'number'> }[] {
   const result = buildPiece(defaultSpec(kind));
   const letters = partLetters(result);
-  return result.parts.map((p) => ({ partId: p.id, sheet: partSheet(p, letters.get(p.id)!, { size: 'letter', orientation: 'landscape' }, 'in') }));
+  return result.parts.map((p) => ({ partId: p.id, part: p, sheet: partSheet(p, letters.get(p.id)!, { size: 'letter', orientation: 'landscape' }, 'in') }));
 }
 const built = Object.fromEntries(KINDS.map((k) => [k, sheetsOf(k)])) as Record<(typeof KINDS)[number], ReturnType<typeof sheetsOf>>;
 
@@ -57,6 +59,18 @@ describe('partSheet', () => {
       }
     }
     if (kind !== 'dresser') expect(notes).toBeGreaterThan(0);
+  });
+
+  it.each(KINDS)('writes every defining size of every part on its views of the default %s', (kind) => {
+    const missing: string[] = [];
+    for (const { part, sheet } of built[kind]) {
+      // The drawing alone: dimensions and notes on the views, not the cut table.
+      const drawn = sheet.views.flatMap((v) => v.primitives.flatMap((p) => (p.type === 'label' ? [p.text] : []))).join('\n');
+      for (const need of definingSizes(part, 'in')) {
+        if (!need.texts.some((t) => writes(drawn, t))) missing.push(`${part.name}: ${need.what} (${need.texts.join(' or ')})`);
+      }
+    }
+    expect(missing).toEqual([]);
   });
 
   it('draws a rabbet and the tongue it leaves, taken at one place, as one mark with both numbers', () => {
