@@ -1,7 +1,11 @@
+import { dirname, resolve } from 'node:path';
+import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
 import { runCli } from '../../../server/cli/main.ts';
 import { captureCliOutput } from '../../support/cliOutput.ts';
 
+/** The fixtures folder, found from this file so the test runs from any working folder. */
+const FIXTURES = resolve(dirname(fileURLToPath(import.meta.url)), '../../fixtures');
 const MM_TOLERANCE = 1e-6;
 const IN = 25.4;
 
@@ -51,7 +55,7 @@ describe('casewright cutlist', () => {
   });
 
   it('builds a spec file', async () => {
-    const code = await runCli(['cutlist', 'tests/fixtures/specs/chest-toy-maple.json', '--json']);
+    const code = await runCli(['cutlist', resolve(FIXTURES, 'specs/chest-toy-maple.json'), '--json']);
     expect(code).toBe(0);
     const out = JSON.parse(captured.stdout) as CutlistJson;
     expect(Math.abs(out.bboxMm[2] - 457.2)).toBeLessThan(MM_TOLERANCE);
@@ -73,7 +77,7 @@ describe('casewright cutlist', () => {
   });
 
   it('refuses a spec file with an impossible combination, naming the parameter and the limit', async () => {
-    const code = await runCli(['cutlist', 'tests/fixtures/specs/chest-invalid-legs.json']);
+    const code = await runCli(['cutlist', resolve(FIXTURES, 'specs/chest-invalid-legs.json')]);
     expect(code).toBe(2);
     expect(captured.stdout).toBe('');
     expect(captured.stderr).toMatch(/legSize: .*wider than half the width.*at most 137.3 mm/);

@@ -1,12 +1,16 @@
 import { copyFileSync, existsSync, mkdirSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
-import { join, resolve } from 'node:path';
+import { dirname, join, resolve } from 'node:path';
+import { fileURLToPath } from 'node:url';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { runCli } from '../../../server/cli/main.ts';
 import { captureCliOutput } from '../../support/cliOutput.ts';
 import { fromUserCwd } from '../../../server/cli/paths.ts';
 
-const FIXTURES = resolve('tests/fixtures');
+const HERE = dirname(fileURLToPath(import.meta.url));
+/** Found from this file, so the test runs from any working folder. */
+const FIXTURES = resolve(HERE, '../../fixtures');
+const REPOSITORY = resolve(HERE, '../../..');
 
 let userDir: string;
 const captured = captureCliOutput();
@@ -47,7 +51,7 @@ describe('casewright commands with relative paths', () => {
   it('plan writes --out beside the user, not in the repository', async () => {
     expect(await runCli(['plan', 'specs/toy.json', '--format', 'csv', '--out', 'toy.csv'])).toBe(0);
     expect(existsSync(join(userDir, 'toy.csv'))).toBe(true);
-    expect(existsSync(resolve('toy.csv'))).toBe(false);
+    expect(existsSync(resolve(REPOSITORY, 'toy.csv'))).toBe(false);
     expect(readFileSync(join(userDir, 'toy.csv'), 'utf8')).toContain('Finished length (in)');
   });
 

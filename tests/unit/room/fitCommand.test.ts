@@ -1,9 +1,13 @@
+import { dirname, resolve } from 'node:path';
+import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
 import { runCli } from '../../../server/cli/main.ts';
 import { captureCliOutput } from '../../support/cliOutput.ts';
 
-const ROOM = 'tests/fixtures/rooms/coastal-bedroom.json';
-const SPEC = 'tests/fixtures/specs/chest-blanket-coastal.json';
+/** The fixtures folder, found from this file so the test runs from any working folder. */
+const FIXTURES = resolve(dirname(fileURLToPath(import.meta.url)), '../../fixtures');
+const ROOM = resolve(FIXTURES, 'rooms/coastal-bedroom.json');
+const SPEC = resolve(FIXTURES, 'specs/chest-blanket-coastal.json');
 
 const captured = captureCliOutput();
 
@@ -37,7 +41,7 @@ describe('casewright fit', () => {
   });
 
   it('exits 2 naming the room field when the room file is wrong', async () => {
-    const code = await runCli(['fit', 'chest', '--room', 'tests/fixtures/rooms/does-not-exist.json']);
+    const code = await runCli(['fit', 'chest', '--room', resolve(FIXTURES, 'rooms/does-not-exist.json')]);
     expect(code).toBe(2);
     expect(captured.stdout).toBe('');
     expect(captured.stderr).toContain('--room');

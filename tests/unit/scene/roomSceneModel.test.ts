@@ -1,5 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { readFileSync } from 'node:fs';
+import { dirname, resolve } from 'node:path';
+import { fileURLToPath } from 'node:url';
 import { buildPiece, defaultSpec } from '../../../shared/engine/index.ts';
 import { fitRoom } from '../../../shared/room/fitRoom.ts';
 import { parseRoomSection } from '../../../shared/room/parseRoom.ts';
@@ -12,7 +14,7 @@ import { sceneModel } from '../../../src/scene/sceneModel.ts';
 const TOLERANCE_MM = 1e-6;
 
 const result = buildPiece(defaultSpec('chest'));
-const room = parseRoomSection(JSON.parse(readFileSync('tests/fixtures/rooms/coastal-bedroom.json', 'utf8')));
+const room = parseRoomSection(JSON.parse(readFileSync(resolve(dirname(fileURLToPath(import.meta.url)), '../../fixtures/rooms/coastal-bedroom.json'), 'utf8')));
 const fit = fitRoom(room, envelopeFromResult(result));
 const model = sceneModel(result, { explode: 0 });
 const placed = placeInRoom(model, fit.scene);
