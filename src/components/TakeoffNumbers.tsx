@@ -44,7 +44,11 @@ export function TakeoffNumbers({ takeoff }: { takeoff: MaterialsTakeoff }) {
               <td className="whitespace-nowrap px-2 py-1 text-right">{b.layout.boardFeetBought > 0 ? pct(b.layout.boardFeetFinished / b.layout.boardFeetBought) : '—'}</td>
               <td className="px-2 py-1 font-sans text-xs text-graphite-soft">
                 {b.layout.boards.length} board{b.layout.boards.length === 1 ? '' : 's'}, {b.layout.boardFeetRough.toFixed(2)} bd ft rough
-                {b.layout.splitGroups.length > 0 && <span className="text-pencil"> · grain match split: {b.layout.splitGroups.length} group{b.layout.splitGroups.length === 1 ? '' : 's'} too wide for one board</span>}
+                {b.layout.splitWarnings.length > 0 && (
+                  <span className="text-pencil" title={b.layout.splitWarnings.map((w) => w.message).join('\n')}>
+                    {' '}· grain match split: {b.layout.splitWarnings.map((w) => w.label).join(', ')} will not come from one board
+                  </span>
+                )}
                 {b.layout.cancelled ? ' · stopped early' : ''}
               </td>
             </tr>
