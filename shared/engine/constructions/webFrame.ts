@@ -123,14 +123,19 @@ export function webFrame(o: WebFrameOptions): WebFrame {
   const grooved = (i: number, side: 'left' | 'right'): boolean => o.dustPanel !== undefined && (side === 'left' ? i > 0 : i < last);
   const runners = o.runnersX.map((xr, i) => {
     const tx: [number, number] = [Math.max(xr[0], ext[0]) + sh, Math.min(xr[1], ext[1]) - sh];
+    // A runner grooved on its left only is its left-hand twin turned end for end: list its tenon
+    // cheeks in the turned order so the two merge into one part.
+    const twin = grooved(i, 'left') && !grooved(i, 'right');
     const features: FeatureDraft[] = (['front', 'back'] as const).map((end) => {
       const ys: [number, number] = end === 'front' ? [ry[0], o.frontRailY[1]] : [o.backRailY[0], ry[1]];
+      const cheeks = [boxBetween([xr[0], ys[0], tz[0]], [tx[0], ys[1], tz[1]]), boxBetween([tx[1], ys[0], tz[0]], [xr[1], ys[1], tz[1]])];
+      if (twin) cheeks.reverse();
       return {
         id: `tongue-${end}`, idTemplate: 'tongue-{face}', type: 'tongue', label: 'stub tenon into a rail groove', faceDir: end === 'front' ? '-Y' : '+Y',
         tongue: boxBetween([tx[0], ys[0], tz[0]], [tx[1], ys[1], tz[1]]),
         removed: [
           boxBetween([xr[0], ys[0], z0], [xr[1], ys[1], tz[0]]), boxBetween([xr[0], ys[0], tz[1]], [xr[1], ys[1], z1]),
-          boxBetween([xr[0], ys[0], tz[0]], [tx[0], ys[1], tz[1]]), boxBetween([tx[1], ys[0], tz[0]], [xr[1], ys[1], tz[1]]),
+          ...cheeks,
         ].filter((b) => b.max[0] - b.min[0] > 1e-9),
       };
     });

@@ -64,8 +64,9 @@ export interface WebFrameLayout {
   dustPanelSheet: CaseParams['backSheet'] | null;
 }
 
-/** Web frames are 3/4 in stock, grooved 1/4 in deep, with 1/16 in at each tenon or panel edge. Common practice, no published source. */
+/** Web frames (3/4 in stock) are grooved 1/4 in deep for the runners' tenons and the dust panels. Common practice, no published source. */
 export const WEB_FRAME_GROOVE_DEPTH_MM = 0.25 * 25.4;
+/** Gap between a web-frame tenon or dust-panel edge and its groove's bottom: 1/16 in. Common practice, no published source. */
 export const WEB_FRAME_CLEARANCE_MM = 25.4 / 16;
 /** Groove for the runners' tenons in an open web frame: 1/4 in. Common practice, no published source. */
 const OPEN_FRAME_GROOVE_MM = 0.25 * 25.4;

@@ -162,7 +162,9 @@ describe('buildPiece (dresser), web frames worked by hand', () => {
     const runners = r.parts.filter((p) => p.id.startsWith('web-frame-runner'));
     expect(runners.reduce((n, p) => n + p.quantity, 0)).toBe(6);
     runners.forEach((p) => within(p.lengthMm, 340.519));
-    expect(runners.some((p) => Math.abs(p.widthMm - 44.45) < MM_TOLERANCE)).toBe(true);
+    // The left and right side runners are one part turned end for end: four of them.
+    within(part(r, 'web-frame-runner').widthMm, 44.45);
+    expect(part(r, 'web-frame-runner').quantity).toBe(4);
     // The runner under the divider reaches under both drawers' sides: 18.256 + 2 × (12.7 + 12.7) = 69.056.
     expect(runners.some((p) => Math.abs(p.widthMm - 69.056) < MM_TOLERANCE)).toBe(true);
     // Panel: bay 56.356–676.672 (the centre runner at 711.2 ± 34.528), plus 2 × (6.35 − 1.5875) = 629.841 by 340.519.
