@@ -3,6 +3,7 @@ import type { BoardInStock, DefectKind, StockDefect } from '../../shared/materia
 import { MAX_BOARD_WIDTH_MM, MAX_LABEL_CHARS, MAX_STOCK_LENGTH_MM, type StockProblem } from '../../shared/schemas/stock.ts';
 import { SPECIES, SPECIES_IDS } from '../../shared/wood/species.ts';
 import { lengthsInUserUnits } from '../editor/roomText.ts';
+import { READ_ONLY_FIELDS } from '../materials/readOnlyFields.ts';
 import { stockFieldName } from '../materials/stockFieldName.ts';
 import { useLength } from '../state/useLength.ts';
 import { LengthInput } from './LengthInput.tsx';
@@ -48,7 +49,7 @@ export function StockBoardsTable({ boards, onChange, newBoard, usage, problems, 
   const rowProblems = (i: number) => problems.filter((p) => p.path[0] === 'boardsInStock' && p.path[1] === i);
 
   return (
-    <fieldset disabled={readOnly} className="min-w-0">
+    <fieldset disabled={readOnly} className={`min-w-0 ${READ_ONLY_FIELDS}`}>
       <div className="overflow-x-auto rounded-sm border border-rule">
         <table className="w-full border-collapse text-[13px]" aria-label="Boards on hand">
           <thead className="bg-sheet text-xs text-graphite-soft shadow-[0_1px_0_var(--color-rule)]">

@@ -4,6 +4,7 @@ import { MAX_BOARD_WIDTH_MM, MAX_KERF_MM, MAX_OFFCUT_COUNT, MAX_STOCK_LENGTH_MM 
 import { SHEET_GOODS, SHEET_GOOD_IDS } from '../../shared/wood/sheetGoods.ts';
 import { LengthInput } from './LengthInput.tsx';
 import { LengthListInput } from './LengthListInput.tsx';
+import { READ_ONLY_FIELDS } from '../materials/readOnlyFields.ts';
 
 /**
  * The workshop's stock the layouts draw from: sheet size, offcuts kept, board sizes for sale,
@@ -16,7 +17,7 @@ export function StockOptionsForm({ settings, onChange, sheetIds, readOnly = fals
   const offcutChoices = [...sheetIds, ...SHEET_GOOD_IDS.filter((id) => !sheetIds.includes(id))];
   return (
     <form aria-label="Stock" onSubmit={(e) => e.preventDefault()}>
-      <fieldset disabled={readOnly} className="grid gap-3 text-sm">
+      <fieldset disabled={readOnly} className={`grid gap-3 text-sm ${READ_ONLY_FIELDS}`}>
         <fieldset className="grid grid-cols-2 gap-2">
           <legend className="mb-1 text-xs font-semibold uppercase tracking-widest text-graphite-soft">Sheets for sale</legend>
           <LengthInput label="Sheet width" valueMm={settings.sheetWidthMm} maxMm={MAX_STOCK_MM} onChange={(sheetWidthMm) => set({ sheetWidthMm })} />

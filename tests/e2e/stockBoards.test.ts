@@ -160,5 +160,6 @@ describe('Boards on hand', () => {
     expect(await page.getByRole('button', { name: 'Add a board' }).count()).toBe(0);
     expect(await page.getByLabel('Board 1 label').isDisabled()).toBe(true);
     expect(await page.getByLabel('Kerf').isDisabled()).toBe(true);
+    await shot('materials-stock-read-only');
   });
 });
