@@ -117,6 +117,26 @@ function pushLocalBox(out: ShapeKey, box: Box3, draft: PartDraft, axes: AxisMap)
   out.push(snap(local[0]!), snap(local[1]!), snap(local[2]!), snap(local[3]!), snap(local[4]!), snap(local[5]!));
 }
 
+/**
+ * 0 … n-1 in the stable order of `compare`. A part has a handful of features, where insertion
+ * sort beats the built-in sort's set-up; a side full of shelf-pin holes takes the built-in one.
+ */
+function indicesSorted(n: number, compare: (i: number, j: number) => number): number[] {
+  const order: number[] = [];
+  for (let i = 0; i < n; i++) order.push(i);
+  if (n > 16) return order.sort(compare);
+  for (let k = 1; k < n; k++) {
+    const i = order[k]!;
+    let at = k;
+    while (at > 0 && compare(order[at - 1]!, i) > 0) {
+      order[at] = order[at - 1]!;
+      at--;
+    }
+    order[at] = i;
+  }
+  return order;
+}
+
 /** The shape of `draft` in its frame for `axes`: templated ids filled in, features in id order. */
 function shapeOf(draft: PartDraft, axes: AxisMap): Shape {
   const drafts = draft.features;
@@ -134,19 +154,19 @@ function shapeOf(draft: PartDraft, axes: AxisMap): Shape {
   if (templated) {
     // Templated ids number features in order along the part: by the low corner of each one's
     // first box (a tongue's own solid when it removes nothing).
-    const low = new Float64Array(3 * n);
+    // A plain array: allocating a typed array costs more than the few numbers in it.
+    const low: number[] = [];
     for (let i = 0; i < n; i++) {
       const fd = drafts[i]!;
       const first = fd.removed[0] ?? (fd.type === 'tongue' ? fd.tongue : undefined);
-      if (!first) continue;
-      worldBoxToLocalInto(first, draft.size, axes, draft.world.min, local, 0);
-      low[3 * i] = local[0]!;
-      low[3 * i + 1] = local[1]!;
-      low[3 * i + 2] = local[2]!;
+      if (first) {
+        worldBoxToLocalInto(first, draft.size, axes, draft.world.min, local, 0);
+        low.push(local[0]!, local[1]!, local[2]!);
+      } else {
+        low.push(0, 0, 0);
+      }
     }
-    const along: number[] = [];
-    for (let i = 0; i < n; i++) along.push(i);
-    along.sort((i, j) => low[3 * i]! - low[3 * j]! || low[3 * i + 1]! - low[3 * j + 1]! || low[3 * i + 2]! - low[3 * j + 2]!);
+    const along = indicesSorted(n, (i, j) => low[3 * i]! - low[3 * j]! || low[3 * i + 1]! - low[3 * j + 1]! || low[3 * i + 2]! - low[3 * j + 2]!);
     const counters = new Map<string, number>();
     idMap = new Map();
     for (const i of along) {
@@ -159,9 +179,7 @@ function shapeOf(draft: PartDraft, axes: AxisMap): Shape {
       idMap.set(fd.id, ids[i]!);
     }
   }
-  const order: number[] = [];
-  for (let i = 0; i < n; i++) order.push(i);
-  order.sort((i, j) => (ids[i]! < ids[j]! ? -1 : ids[i]! > ids[j]! ? 1 : 0));
+  const order = indicesSorted(n, (i, j) => (ids[i]! < ids[j]! ? -1 : ids[i]! > ids[j]! ? 1 : 0));
 
   const material = draft.material.kind === 'solid' ? draft.material.speciesId : draft.material.sheetId;
   const key: ShapeKey = [draft.role, material, draft.grain, snap(draft.size[0]), snap(draft.size[1]), snap(draft.size[2]), draft.glueUp?.boards ?? 0];
@@ -234,6 +252,7 @@ interface JointTally {
 
 // Every instance of a part in a run, or none: a part half in runs has no sensible board order.
 function grainMatchOf(same: readonly PartDraft[]): { grainMatch?: readonly GrainMatch[] } {
+  if (!same.some((d) => d.grainMatch)) return {};
   const runs = same.flatMap((d) => (d.grainMatch ? [d.grainMatch] : []));
   if (runs.length === 0) return {};
   assert(runs.length === same.length, `part ${same[0]!.label}: every instance or none takes a grain-match run`);

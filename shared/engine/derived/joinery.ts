@@ -43,6 +43,9 @@ export function setUpsFor(part: Part, feature: Feature): SetUp[] {
 /** One schedule line per joint. */
 export function joinerySchedule(parts: readonly Part[], joints: readonly Joint[]): JoineryRow[] {
   const byId = new Map(parts.map((p) => [p.id, p]));
+  // A feature often serves several joints (a leg's groove holds a rail and a panel), and
+  // writing its numbers as text is the dearest step here: each is written once.
+  const summaries = new Map<Feature, string>();
   return joints.map((joint) => {
     const features: JoineryRow['features'][number][] = [];
     const setUps: SetUp[] = [];
@@ -52,7 +55,12 @@ export function joinerySchedule(parts: readonly Part[], joints: readonly Joint[]
       for (const id of member.featureIds) {
         const feature = part.features.find((f) => f.id === id);
         if (!feature) continue;
-        features.push({ partId: part.id, featureId: id, summary: featureSummary(feature) });
+        let summary = summaries.get(feature);
+        if (summary === undefined) {
+          summary = featureSummary(feature);
+          summaries.set(feature, summary);
+        }
+        features.push({ partId: part.id, featureId: id, summary });
         setUps.push(...setUpsFor(part, feature));
       }
     }
