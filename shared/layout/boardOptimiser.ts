@@ -168,7 +168,7 @@ function splitWarning(group: string, unit: BoardUnit, stock: readonly BoardStock
   const need = slots
     ? `its ${slots.length} parts end to end need one board ${inches(lengthNeededMm)} long and ${inches(widthNeededMm)} wide, kerfs included`
     : `its ${unit.length} parts (longest ${inches(lengthNeededMm)}, widest ${inches(widthNeededMm)}) do not all fit on one board`;
-  const message = `Grain match of ${label}: ${need}; no board on offer holds them clear of defects (longest ${inches(longest)}, widest ${inches(widest)}). They are laid out separately: pick boards of like colour and figure, or add a board that size to the stock.`;
+  const message = `${label}: ${need}; no board on offer holds them clear of defects (longest ${inches(longest)}, widest ${inches(widest)}). They are laid out separately: pick boards of like colour and figure, or add a board that size to the stock.`;
   return { group, label, lengthNeededMm, widthNeededMm, message };
 }
 

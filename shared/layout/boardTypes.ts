@@ -149,6 +149,7 @@ export interface SplitGroupWarning {
   /** A run's length end to end with kerfs and its widest length (or an unordered group's longest and widest part). */
   lengthNeededMm: number;
   widthNeededMm: number;
+  /** Starts with `label`, e.g. `drawer fronts, column 1: its 3 parts end to end need one board…`. */
   message: string;
 }
 

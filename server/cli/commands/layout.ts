@@ -111,9 +111,9 @@ export function takeoffLines(takeoff: MaterialsTakeoff, units: LengthUnit): stri
     lines.push(`${b.speciesName} ${b.quarters}/4: ${l.boards.length} board${l.boards.length === 1 ? '' : 's'}, ${l.boardFeetBought.toFixed(2)} bd ft bought, ${l.boardFeetRough.toFixed(2)} in rough parts, ${l.boardFeetFinished.toFixed(2)} in finished parts`);
     l.boards.forEach((plan, i) => {
       lines.push(`  board ${i + 1} (${plan.stockName}${plan.inStock ? ', in stock' : ''}), ${plan.boardFeet.toFixed(2)} bd ft, yield ${pct(plan.yield)}`);
-      for (const p of plan.parts) lines.push(`    ${p.name} #${p.instance + 1}: ${len(p.length)} × ${len(p.width)} rough at (${len(p.x)}, ${len(p.y)})${p.matchGroup ? `, match group ${p.matchGroup}` : ''}`);
+      for (const p of plan.parts) lines.push(`    ${p.name} #${p.instance + 1}: ${len(p.length)} × ${len(p.width)} rough at (${len(p.x)}, ${len(p.y)})${p.matchGroup ? `, ${p.matchOrder !== null ? `grain-matched run ${p.matchLabel ?? p.matchGroup}, place ${p.matchOrder}` : `match group ${p.matchGroup}`}` : ''}`);
     });
-    for (const g of l.splitGroups) lines.push(`  GRAIN MATCH: group ${g} does not fit on one board; its boards come from several`);
+    for (const w of l.splitWarnings) lines.push(`  GRAIN MATCH SPLIT: ${w.message}`);
     for (const u of l.unplaced) lines.push(`  NOT PLACED: ${u.message}`);
   }
   lines.push(`Total: ${takeoff.sheetsBought} sheets, ${takeoff.boardFeetBought.toFixed(2)} bd ft of boards (${takeoff.boardFeetFinished.toFixed(2)} bd ft in finished parts)`);
