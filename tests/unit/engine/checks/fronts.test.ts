@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { doorSweepMm, frontClearanceChecks, MIN_FRONT_GAP_MM, type FrontFacts } from '../../../../shared/engine/checks/fronts.ts';
+import { doorSweepMm, frontClearanceChecks, legAndRailRevealChecks, MIN_FRONT_GAP_MM, type FrontFacts } from '../../../../shared/engine/checks/fronts.ts';
 
 const MM_TOLERANCE = 1e-9;
 
@@ -40,3 +40,22 @@ describe('frontClearanceChecks', () => {
     expect(checks.some((x) => x.id.startsWith('door-hits-neighbour'))).toBe(false);
   });
 });
+
+describe('legAndRailRevealChecks', () => {
+  // A leg-and-rail case: 44.45 mm legs, 19.05 mm rails, a 50.8 mm mullion, 12.7 mm overlay.
+  const frame = { stileMm: 44.45, topRailMm: 19.05, bottomRailMm: 19.05, midRailMm: 19.05, mullionMm: 50.8 };
+
+  it('passes when the rails show alike and the legs and mullions show alike, though legs show more than rails', () => {
+    // Rails: 19.05 − 12.7 = 6.35 top and bottom; 19.05 − 2 × 6.35 = 6.35 between rows. Legs 31.75; mullion 50.8 − 2 × 9.525 = 31.75.
+    expect(legAndRailRevealChecks([], frame, 12.7, 3.175, { railMm: 6.35, mullionMm: 9.525 }, 3, 2)).toEqual([]);
+  });
+
+  it('warns with both spreads when the fronts lap the rail between rows fully', () => {
+    const [c] = legAndRailRevealChecks([], frame, 12.7, 3.175, { railMm: 7.9375, mullionMm: 9.525 }, 3, 2);
+    expect(c?.severity).toBe('warning');
+    // Between rows 19.05 − 15.875 = 3.175 against 6.35 at the top and bottom.
+    expect(Math.abs(c!.numbers.railSpreadMm! - 3.175)).toBeLessThan(MM_TOLERANCE);
+    expect(Math.abs(c!.numbers.uprightSpreadMm!)).toBeLessThan(MM_TOLERANCE);
+  });
+});
+

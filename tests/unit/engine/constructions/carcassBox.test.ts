@@ -63,4 +63,14 @@ describe('carcassBox', () => {
     expect(s.drafts[0]!.world.min[2]).toBe(402.5);
     expect(s.shelves[0]!.spanMm).toBe(562);
   });
+
+  it('breaks each divider at the web-frame bands: one piece per row, the end pieces in the dadoes', () => {
+    // Divider at x = 300 from the bottom's dado (30 − 6 = 24) to the top's (770 + 6 = 776), broken
+    // at the bands 300–320 and 520–540: pieces 540–776, 320–520 and 24–300.
+    const c = box({ dividerXs: [300], dividerBreaksZ: [[300, 320], [520, 540]] });
+    expect(c.dividers.map((d) => [d.world.min[2], d.world.max[2]])).toEqual([[540, 776], [320, 520], [24, 300]]);
+    expect(c.dividerAt(0, 400)).toBe(c.dividers[1]);
+    const dadoJoints = c.joints.filter((j) => j.type === 'dado' && c.dividers.includes(j.a.draft));
+    expect(dadoJoints.map((j) => [c.dividers.indexOf(j.a.draft), j.b.draft === c.bottom ? 'bottom' : 'top'])).toEqual([[2, 'bottom'], [0, 'top']]);
+  });
 });
