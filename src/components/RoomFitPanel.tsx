@@ -19,6 +19,8 @@ interface Props {
  */
 export function RoomFitPanel({ result, spec, design, canEdit }: Props) {
   const length = useRoomLength();
+  // A length never breaks across lines at the dash of 9-15/16".
+  const whole = (mm: number) => <span className="whitespace-nowrap">{length(mm)}</span>;
   const roomView = useEditorStore((s) => s.roomView);
   const { setRoomView, setFormTab } = useEditorStore.getState();
   const outcome = roomFitOutcome(spec.room, result);
@@ -50,11 +52,11 @@ export function RoomFitPanel({ result, spec, design, canEdit }: Props) {
         <div className="flex flex-wrap items-center gap-x-3 gap-y-1 border-b border-rule/70 px-3 py-2 text-[13px]">
           <p className="min-w-0 flex-1">
             <span className="font-semibold">{room.name || 'Room'}</span>{' '}
-            <span className="dim text-graphite-soft">{length(room.width)} × {length(room.depth)}, ceiling {length(room.ceiling)}</span>
+            <span className="dim text-graphite-soft">{whole(room.width)} × {whole(room.depth)}, ceiling {whole(room.ceiling)}</span>
             <br />
             <span className="text-graphite-soft">
-              Against the {room.placement.wall} wall, {length(fit.placed.standoffMm)} off it
-              {niche ? `, in a niche ${length(niche.fromMm)} to ${length(niche.toMm)} along it` : ''}.{' '}
+              Against the {room.placement.wall} wall, {whole(fit.placed.standoffMm)} off it
+              {niche && <>, in a niche {whole(niche.fromMm)} to {whole(niche.toMm)} along it</>}.{' '}
               {failing === 0 ? 'Every check passes.' : `${failing} of ${fit.checks.length} checks ${failing === 1 ? 'does' : 'do'} not pass.`}
             </span>
           </p>
