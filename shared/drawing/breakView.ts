@@ -17,6 +17,8 @@ export interface ViewBreak {
 const MIN_SLENDERNESS = 3;
 /** An uncut stretch must be at least this share of the length to be worth a break. */
 const MIN_BREAK_SHARE = 0.12;
+/** A break must leave out at least this many times the part's width. */
+const MIN_LEFT_OUT_ACROSS = 2;
 /** Most breaks in one view: more would make a rail look like a row of stubs. */
 const MAX_BREAKS = 4;
 
@@ -39,7 +41,8 @@ export function chooseBreaks(length: number, across: number, stations: readonly 
     const keep = Math.max(12, 0.1 * gapLen, across * 0.6);
     const from = a + keep;
     const to = b - keep;
-    if (to - from < MIN_BREAK_SHARE * length * 0.5) continue;
+    // A break that leaves out little only clutters the view.
+    if (to - from < Math.max(MIN_BREAK_SHARE * length * 0.5, MIN_LEFT_OUT_ACROSS * across)) continue;
     out.push({ from, to, gap: Math.max(8, across * 0.25) });
   }
   return out.sort((p, q) => p.from - q.from);

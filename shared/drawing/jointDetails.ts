@@ -89,6 +89,51 @@ function sectionOf(f: Feature, size: readonly [number, number, number]): Section
   }
 }
 
+interface Found {
+  section: Section;
+  f: Feature;
+  count: number;
+}
+
+/** Whether two boxes overlap or touch, seen along `toward` (the two axes a view shows). */
+function touchInView(a: Box3, b: Box3, axes: readonly number[]): boolean {
+  return axes.every((k) => a.min[k]! <= b.max[k]! + EPS && b.min[k]! <= a.max[k]! + EPS);
+}
+
+/**
+ * Cuts whose sections touch in the view they show in — a rabbet and the tongue it leaves, a
+ * groove and a rabbet beside it — are one joint to a maker: one detail draws them together with
+ * all their sizes, titled with both.
+ */
+function joinTouching(found: readonly Found[], axes: ReturnType<typeof partViewAxes>): { section: Section; title: string }[] {
+  const groups: Found[][] = [];
+  for (const item of found) {
+    const { view, box } = item.section;
+    const inView = [axes[view].u.axis, axes[view].v.axis];
+    const group = groups.find((g) => g[0]!.section.view === view && g.some((o) => touchInView(o.section.box, box, inView)));
+    if (group) group.push(item);
+    else groups.push([item]);
+  }
+  return groups.map((g) => {
+    const first = g[0]!.section;
+    const box: Box3 = {
+      min: [0, 1, 2].map((k) => Math.min(...g.map((o) => o.section.box.min[k]!))) as unknown as Box3['min'],
+      max: [0, 1, 2].map((k) => Math.max(...g.map((o) => o.section.box.max[k]!))) as unknown as Box3['max'],
+    };
+    const seen = new Set<string>();
+    const sizes = g.flatMap((o) => o.section.sizes).filter(([axis, a, b]) => {
+      const key = `${axis}|${a.toFixed(2)}|${b.toFixed(2)}`;
+      if (seen.has(key)) return false;
+      seen.add(key);
+      return true;
+    });
+    const counts = new Set(g.map((o) => o.count));
+    const names = [...new Set(g.map((o) => featureKindText(o.f).toLowerCase()))].join(' and ');
+    const alike = counts.size === 1 && g[0]!.count > 1 ? `, ${g[0]!.count} alike` : '';
+    return { section: { ...first, box, sizes, smallest: Math.min(...g.map((o) => o.section.smallest)) }, title: `${names}${alike}` };
+  });
+}
+
 /** The scale (1:n) that draws `smallest` mm at 5 mm or more, as small a drawing as does; 1:1 at most. */
 function detailScale(smallest: number, units: DrawingUnits): number {
   const fitting = usualScales(units).filter((s) => smallest / s >= DETAIL_MIN_PAPER_MM);
@@ -122,7 +167,7 @@ function clip(s: Segment, r: Rect): Segment | null {
  */
 export function jointDetails(part: Part, units: DrawingUnits, viewScales: Readonly<Record<PartViewId, number>>, up: FaceUp = chooseFaceUp(part)): JointDetail[] {
   const size = partSize(part);
-  const sections = new Map<string, { section: Section; f: Feature; count: number }>();
+  const sections = new Map<string, Found>();
   for (const f of part.features) {
     const section = sectionOf(f, size);
     if (!section || section.smallest / viewScales[section.view] >= DETAIL_MIN_PAPER_MM) continue;
@@ -130,10 +175,10 @@ export function jointDetails(part: Part, units: DrawingUnits, viewScales: Readon
     if (seen) seen.count++;
     else sections.set(section.key, { section, f, count: 1 });
   }
-  const chosen = [...sections.values()].sort((a, b) => a.section.smallest - b.section.smallest).slice(0, MAX_DETAILS);
+  const chosen = joinTouching([...sections.values()].sort((a, b) => a.section.smallest - b.section.smallest), partViewAxes(up)).slice(0, MAX_DETAILS);
   const axesOf = partViewAxes(up);
   const grid = chosen.length ? partGrid(part) : null;
-  return chosen.map(({ section, f, count }, i): JointDetail => {
+  return chosen.map(({ section, title: what }, i): JointDetail => {
     const va = axesOf[section.view];
     const [ua, vaAxis] = [va.u.axis, va.v.axis];
     const margin = Math.max(6, 0.8 * Math.max(extent(section.box, ua), extent(section.box, vaAxis)));
@@ -166,7 +211,7 @@ export function jointDetails(part: Part, units: DrawingUnits, viewScales: Readon
       return [dimension(p, q, tier === 0 ? bu0 : bu1, 'v', tier === 0 ? 'left' : 'right', tier, units)];
     });
     const number = String(i + 1);
-    const title = `Detail ${number}: ${featureKindText(f).toLowerCase()}${count > 1 ? `, ${count} alike` : ''}`;
+    const title = `Detail ${number}: ${what}`;
     // At least 3 mm on paper, so the circle shows round a cut the main scale makes tiny.
     const radius = Math.max(Math.max(window.w, window.h) * 0.6, 3 * viewScales[section.view]);
     return {

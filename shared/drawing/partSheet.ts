@@ -131,8 +131,8 @@ function detailBlock(details: readonly JointDetail[], maxW: number): { views: Pl
 
 const moved = (views: readonly PlacedView[], frame: Rect, x: number, y: number): PlacedView[] => centreIn(views, frame, { x, y, w: frame.w, h: frame.h }, true);
 
-/** Average advance of the cut table's sans text (7.5 pt), mm: about half an em. */
-const TABLE_CHAR_MM = 1.35;
+/** Average advance of the cut table's sans text (7.5 pt), mm: a little over half an em, to err on room. */
+const TABLE_CHAR_MM = 1.5;
 /** Height each further line of a wrapped cell adds to its row, mm (7.5 pt at 1.15 leading). */
 const TABLE_LINE_MM = 3.1;
 /** Padding either side of a cell's text, mm. */

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { jointDetails } from '../../../shared/drawing/jointDetails.ts';
+import { jointDetails, markExtent, mergeMarks, type DetailMark } from '../../../shared/drawing/jointDetails.ts';
+import { rectsOverlap } from '../../../shared/drawing/rects.ts';
 import { lengthText } from '../../../shared/drawing/lengthText.ts';
 import { partViews } from '../../../shared/drawing/partViews.ts';
 import { buildPiece, defaultSpec } from '../../../shared/engine/index.ts';
@@ -40,5 +41,32 @@ describe('partViews hole lines', () => {
     const dims = [views.face, views.edge, views.end].flatMap((v) => v.dimensions);
     expect(dims.some((d) => /^\d+ spaces @ /.test(d.text))).toBe(true);
     expect(dims.length).toBeLessThan(holes.length);
+  });
+});
+
+describe('mergeMarks', () => {
+  const scales = { face: 4, edge: 4, end: 4 };
+  const mark = (text: string, x: number, view: DetailMark['view'] = 'end'): DetailMark => ({ view, at: [x, 0], radius: 12, text });
+
+  it('draws marks that would touch at the drawn scale as one circle round both, numbered with both', () => {
+    const merged = mergeMarks([mark('1', 0), mark('3', 4), mark('2', 300)], scales);
+    expect(merged.map((m) => m.text).sort()).toEqual(['1, 3', '2']);
+    const both = merged.find((m) => m.text === '1, 3')!;
+    // The circle holds both circles: centre between them, radius reaching past each.
+    expect(both.radius).toBeGreaterThanOrEqual(12 + 2);
+  });
+
+  it('leaves marks clear of each other, or on different views, alone', () => {
+    const marks = [mark('1', 0), mark('2', 0, 'face'), mark('3', 400)];
+    expect(mergeMarks(marks, scales)).toEqual(marks);
+  });
+
+  it('keeps merging until no two marks on a view touch, labels included', () => {
+    // A chain of marks each touching the next.
+    const merged = mergeMarks([0, 20, 40, 60].map((x, i) => mark(String(i + 1), x)), scales);
+    for (let i = 0; i < merged.length; i++) {
+      for (let j = i + 1; j < merged.length; j++) expect(rectsOverlap(markExtent(merged[i]!, 4), markExtent(merged[j]!, 4))).toBe(false);
+    }
+    expect(merged.flatMap((m) => m.text.split(', ')).sort()).toEqual(['1', '2', '3', '4']);
   });
 });

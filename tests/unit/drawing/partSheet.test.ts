@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { primitiveRect } from '../../../shared/drawing/dimensionLayout.ts';
+import { lengthText } from '../../../shared/drawing/lengthText.ts';
 import { partLetters } from '../../../shared/drawing/partLetters.ts';
 import { partSheet } from '../../../shared/drawing/partSheet.ts';
 import { rectsOverlap, rectUnion } from '../../../shared/drawing/rects.ts';
@@ -73,9 +74,14 @@ describe('partSheet', () => {
     expect(missing).toEqual([]);
   });
 
-  it('draws a rabbet and the tongue it leaves, taken at one place, as one mark with both numbers', () => {
-    const panel = built.chest.find((s) => s.partId === 'front-panel' || /panel/.test(s.partId))!;
-    const texts = panel.sheet.views.flatMap((v) => markBoxes(v.primitives)).map((m) => m.text);
-    expect(texts.some((t) => /^\d+(, \d+)+$/.test(t))).toBe(true);
+  it('draws a rabbet and the tongue it leaves as one detail with the sizes of both', () => {
+    const panel = built.chest.find((s) => s.part.features.some((f) => f.type === 'rabbet') && s.part.features.some((f) => f.type === 'tongue'))!;
+    const detail = panel.sheet.views.find((v) => /^Detail \d+: rabbet and tongue/.test(v.title));
+    expect(detail, panel.sheet.views.map((v) => v.title).join(', ')).toBeDefined();
+    const texts = detail!.primitives.flatMap((p) => (p.type === 'label' ? [p.text] : []));
+    const rabbet = panel.part.features.find((f) => f.type === 'rabbet')!;
+    const tongue = panel.part.features.find((f) => f.type === 'tongue')!;
+    if (rabbet.type !== 'rabbet' || tongue.type !== 'tongue') throw new Error('feature kinds');
+    expect(texts).toEqual(expect.arrayContaining([lengthText(rabbet.depthMm, 'in'), lengthText(tongue.thicknessMm, 'in')]));
   });
 });
