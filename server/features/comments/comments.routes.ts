@@ -2,7 +2,7 @@
 import { approvalCreateBody, commentCreateBody, commentListQuery } from '../../../shared/schemas/comments.ts';
 import { designParams } from '../../../shared/schemas/designs.ts';
 import type { RouteDef } from '../../auth/access.ts';
-import { currentUser } from '../../auth/user.ts';
+import { handle } from '../../http/handle.ts';
 import type { FeatureDeps } from '../context.ts';
 import { createCommentService } from './comments.service.ts';
 
@@ -13,37 +13,25 @@ export function commentRoutes(deps: FeatureDeps): RouteDef[] {
       method: 'get',
       path: '/designs/:designId/comments',
       access: { kind: 'member', action: 'comment.read', scope: 'design' },
-      handler: async (req, res) => {
-        const { designId } = designParams.parse(req.params);
-        res.json({ comments: await service.list(designId, commentListQuery.parse(req.query)) });
-      },
+      handler: handle({ params: designParams, query: commentListQuery }, async ({ params, query }) => ({ comments: await service.list(params.designId, query) })),
     },
     {
       method: 'post',
       path: '/designs/:designId/comments',
       access: { kind: 'member', action: 'comment.create', scope: 'design' },
-      handler: async (req, res) => {
-        const { designId } = designParams.parse(req.params);
-        res.status(201).json(await service.create(designId, currentUser(req).id, commentCreateBody.parse(req.body)));
-      },
+      handler: handle({ params: designParams, body: commentCreateBody, status: 201 }, ({ params, body, userId }) => service.create(params.designId, userId, body)),
     },
     {
       method: 'get',
       path: '/designs/:designId/approvals',
       access: { kind: 'member', action: 'design.read', scope: 'design' },
-      handler: async (req, res) => {
-        const { designId } = designParams.parse(req.params);
-        res.json({ approvals: await service.approvals(designId) });
-      },
+      handler: handle({ params: designParams }, async ({ params }) => ({ approvals: await service.approvals(params.designId) })),
     },
     {
       method: 'post',
       path: '/designs/:designId/approvals',
       access: { kind: 'member', action: 'approval.decide', scope: 'design' },
-      handler: async (req, res) => {
-        const { designId } = designParams.parse(req.params);
-        res.status(201).json(await service.decide(designId, currentUser(req).id, approvalCreateBody.parse(req.body)));
-      },
+      handler: handle({ params: designParams, body: approvalCreateBody, status: 201 }, ({ params, body, userId }) => service.decide(params.designId, userId, body)),
     },
   ];
 }

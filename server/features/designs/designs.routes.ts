@@ -5,7 +5,7 @@ import {
 import type { PieceSpec } from '../../../shared/engine/types.ts';
 import { workshopIdParams } from '../../../shared/schemas/workshops.ts';
 import type { RouteDef } from '../../auth/access.ts';
-import { currentUser } from '../../auth/user.ts';
+import { handle } from '../../http/handle.ts';
 import type { FeatureDeps } from '../context.ts';
 import { createDesignService } from './designs.service.ts';
 
@@ -16,113 +16,73 @@ export function designRoutes(deps: FeatureDeps): RouteDef[] {
       method: 'get',
       path: '/workshops/:workshopId/designs',
       access: { kind: 'member', action: 'design.read', scope: 'workshop' },
-      handler: async (req, res) => {
-        const { workshopId } = workshopIdParams.parse(req.params);
-        res.json(await service.list(workshopId, currentUser(req).id, designListQuery.parse(req.query)));
-      },
+      handler: handle({ params: workshopIdParams, query: designListQuery }, ({ params, query, userId }) => service.list(params.workshopId, userId, query)),
     },
     {
       method: 'post',
       path: '/workshops/:workshopId/designs',
       access: { kind: 'member', action: 'design.create', scope: 'workshop' },
-      handler: async (req, res) => {
-        const { workshopId } = workshopIdParams.parse(req.params);
-        const body = designCreateBody.parse(req.body);
-        res.status(201).json(await service.create(workshopId, currentUser(req).id, { ...body, spec: body.spec as PieceSpec }));
-      },
+      handler: handle({ params: workshopIdParams, body: designCreateBody, status: 201 }, ({ params, body, userId }) => service.create(params.workshopId, userId, { ...body, spec: body.spec as PieceSpec })),
     },
     {
       method: 'get',
       path: '/designs/:designId',
       access: { kind: 'member', action: 'design.read', scope: 'design' },
-      handler: async (req, res) => {
-        const { designId } = designParams.parse(req.params);
-        res.json(await service.detail(designId, currentUser(req).id));
-      },
+      handler: handle({ params: designParams }, ({ params, userId }) => service.detail(params.designId, userId)),
     },
     {
       method: 'patch',
       path: '/designs/:designId',
       access: { kind: 'member', action: 'design.edit', scope: 'design' },
-      handler: async (req, res) => {
-        const { designId } = designParams.parse(req.params);
-        const { title } = designUpdateBody.parse(req.body);
-        res.json(await service.rename(designId, title, currentUser(req).id));
-      },
+      handler: handle({ params: designParams, body: designUpdateBody }, ({ params, body, userId }) => service.rename(params.designId, body.title, userId)),
     },
     {
       method: 'get',
       path: '/designs/:designId/revisions',
       access: { kind: 'member', action: 'design.read', scope: 'design' },
-      handler: async (req, res) => {
-        const { designId } = designParams.parse(req.params);
-        res.json({ revisions: await service.revisions(designId) });
-      },
+      handler: handle({ params: designParams }, async ({ params }) => ({ revisions: await service.revisions(params.designId) })),
     },
     {
       method: 'post',
       path: '/designs/:designId/revisions',
       access: { kind: 'member', action: 'design.edit', scope: 'design' },
-      handler: async (req, res) => {
-        const { designId } = designParams.parse(req.params);
-        const body = revisionCreateBody.parse(req.body);
-        res.status(201).json(await service.save(designId, currentUser(req).id, { ...body, spec: body.spec as PieceSpec }));
-      },
+      handler: handle({ params: designParams, body: revisionCreateBody, status: 201 }, ({ params, body, userId }) => service.save(params.designId, userId, { ...body, spec: body.spec as PieceSpec })),
     },
     {
       method: 'get',
       path: '/designs/:designId/revisions/:number',
       access: { kind: 'member', action: 'design.read', scope: 'design' },
-      handler: async (req, res) => {
-        const { designId, number } = revisionParams.parse(req.params);
-        res.json(await service.revision(designId, number));
-      },
+      handler: handle({ params: revisionParams }, ({ params }) => service.revision(params.designId, params.number)),
     },
     {
       method: 'get',
       path: '/designs/:designId/compare',
       access: { kind: 'member', action: 'design.read', scope: 'design' },
-      handler: async (req, res) => {
-        const { designId } = designParams.parse(req.params);
-        const { from, to } = compareQuery.parse(req.query);
-        res.json(await service.compare(designId, from, to));
-      },
+      handler: handle({ params: designParams, query: compareQuery }, ({ params, query }) => service.compare(params.designId, query.from, query.to)),
     },
     {
       method: 'post',
       path: '/designs/:designId/restore',
       access: { kind: 'member', action: 'design.edit', scope: 'design' },
-      handler: async (req, res) => {
-        const { designId } = designParams.parse(req.params);
-        res.status(201).json(await service.restore(designId, currentUser(req).id, restoreBody.parse(req.body)));
-      },
+      handler: handle({ params: designParams, body: restoreBody, status: 201 }, ({ params, body, userId }) => service.restore(params.designId, userId, body)),
     },
     {
       method: 'post',
       path: '/designs/:designId/fork',
       access: { kind: 'member', action: 'design.fork', scope: 'design' },
-      handler: async (req, res) => {
-        const { designId } = designParams.parse(req.params);
-        res.status(201).json(await service.fork(designId, currentUser(req).id, forkBody.parse(req.body)));
-      },
+      handler: handle({ params: designParams, body: forkBody, status: 201 }, ({ params, body, userId }) => service.fork(params.designId, userId, body)),
     },
     {
       method: 'post',
       path: '/designs/:designId/archive',
       access: { kind: 'member', action: 'design.archive', scope: 'design' },
-      handler: async (req, res) => {
-        const { designId } = designParams.parse(req.params);
-        res.json(await service.setArchived(designId, true, currentUser(req).id));
-      },
+      handler: handle({ params: designParams }, ({ params, userId }) => service.setArchived(params.designId, true, userId)),
     },
     {
       method: 'post',
       path: '/designs/:designId/unarchive',
       access: { kind: 'member', action: 'design.archive', scope: 'design' },
-      handler: async (req, res) => {
-        const { designId } = designParams.parse(req.params);
-        res.json(await service.setArchived(designId, false, currentUser(req).id));
-      },
+      handler: handle({ params: designParams }, ({ params, userId }) => service.setArchived(params.designId, false, userId)),
     },
   ];
 }

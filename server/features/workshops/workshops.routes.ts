@@ -1,7 +1,7 @@
 /** `/api/workshops/*`: the user's workshops, settings and members. */
 import { memberParams, memberUpdateBody, workshopCreateBody, workshopIdParams, workshopUpdateBody } from '../../../shared/schemas/workshops.ts';
 import type { RouteDef } from '../../auth/access.ts';
-import { currentUser } from '../../auth/user.ts';
+import { handle } from '../../http/handle.ts';
 import type { FeatureDeps } from '../context.ts';
 import { createWorkshopService } from './workshops.service.ts';
 
@@ -12,76 +12,49 @@ export function workshopRoutes(deps: FeatureDeps): RouteDef[] {
       method: 'get',
       path: '/workshops',
       access: { kind: 'signedIn' },
-      handler: async (req, res) => {
-        res.json({ workshops: await service.listForUser(currentUser(req).id) });
-      },
+      handler: handle({}, async ({ userId }) => ({ workshops: await service.listForUser(userId) })),
     },
     {
       method: 'post',
       path: '/workshops',
       access: { kind: 'signedIn' },
-      handler: async (req, res) => {
-        const { name } = workshopCreateBody.parse(req.body);
-        res.status(201).json(await service.create(name, currentUser(req).id));
-      },
+      handler: handle({ body: workshopCreateBody, status: 201 }, ({ body, userId }) => service.create(body.name, userId)),
     },
     {
       method: 'get',
       path: '/workshops/:workshopId',
       access: { kind: 'member', action: 'workshop.read', scope: 'workshop' },
-      handler: async (req, res) => {
-        const { workshopId } = workshopIdParams.parse(req.params);
-        res.json(await service.get(workshopId, currentUser(req).id));
-      },
+      handler: handle({ params: workshopIdParams }, ({ params, userId }) => service.get(params.workshopId, userId)),
     },
     {
       method: 'patch',
       path: '/workshops/:workshopId',
       access: { kind: 'member', action: 'workshop.update', scope: 'workshop' },
-      handler: async (req, res) => {
-        const { workshopId } = workshopIdParams.parse(req.params);
-        const { name } = workshopUpdateBody.parse(req.body);
-        res.json(await service.rename(workshopId, name, currentUser(req).id));
-      },
+      handler: handle({ params: workshopIdParams, body: workshopUpdateBody }, ({ params, body, userId }) => service.rename(params.workshopId, body.name, userId)),
     },
     {
       method: 'delete',
       path: '/workshops/:workshopId',
       access: { kind: 'member', action: 'workshop.delete', scope: 'workshop' },
-      handler: async (req, res) => {
-        const { workshopId } = workshopIdParams.parse(req.params);
-        await service.remove(workshopId);
-        res.status(204).end();
-      },
+      handler: handle({ params: workshopIdParams, status: 204 }, ({ params }) => service.remove(params.workshopId)),
     },
     {
       method: 'get',
       path: '/workshops/:workshopId/members',
       access: { kind: 'member', action: 'members.read', scope: 'workshop' },
-      handler: async (req, res) => {
-        const { workshopId } = workshopIdParams.parse(req.params);
-        res.json({ members: await service.members(workshopId) });
-      },
+      handler: handle({ params: workshopIdParams }, async ({ params }) => ({ members: await service.members(params.workshopId) })),
     },
     {
       method: 'patch',
       path: '/workshops/:workshopId/members/:userId',
       access: { kind: 'member', action: 'members.manage', scope: 'workshop' },
-      handler: async (req, res) => {
-        const { workshopId, userId } = memberParams.parse(req.params);
-        const { role } = memberUpdateBody.parse(req.body);
-        res.json(await service.setRole(workshopId, userId, role));
-      },
+      handler: handle({ params: memberParams, body: memberUpdateBody }, ({ params, body }) => service.setRole(params.workshopId, params.userId, body.role)),
     },
     {
       method: 'delete',
       path: '/workshops/:workshopId/members/:userId',
       access: { kind: 'member', action: 'members.manage', scope: 'workshop' },
-      handler: async (req, res) => {
-        const { workshopId, userId } = memberParams.parse(req.params);
-        await service.removeMember(workshopId, userId);
-        res.status(204).end();
-      },
+      handler: handle({ params: memberParams, status: 204 }, ({ params }) => service.removeMember(params.workshopId, params.userId)),
     },
   ];
 }
