@@ -18,7 +18,7 @@ import { scaleText, usualScales } from './scale.ts';
 import type { FlowBlock, Label, PlacedView, Rect, Sheet, SheetSpec } from './types.ts';
 
 /** Height of a part sheet's heading, mm. */
-const HEADING_MM = 16;
+const HEADING_MM = 18;
 /** Share of the drawing area's height part views may always take, however long the cut table. */
 const PART_VIEWS_MIN_SHARE = 0.66;
 /** Height a cut-table row and the table's title and footnote take, mm (7.5 pt rows). */

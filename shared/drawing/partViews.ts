@@ -14,6 +14,8 @@ import { partEdges, partGrid } from './partSolid.ts';
 import type { DimensionRequest, ModelView, Primitive, Pt, ViewNote } from './types.ts';
 
 const EPS = 0.01;
+/** A cut whose middle lies in this lower share of the view (clearly not centred) is dimensioned below it. */
+const NEAR_LOW_SHARE = 0.35;
 const TITLES: Readonly<Record<PartViewId, string>> = { face: 'Face', edge: 'Edge', end: 'End' };
 
 
@@ -40,9 +42,14 @@ class DimensionSet {
     const across = horizontal ? va.v : va.u;
     const a = onAxis(use, this.size, lo);
     const b = onAxis(use, this.size, hi);
-    const side: DimensionRequest['side'] = horizontal ? (extra.overall ? 'below' : 'above') : extra.overall ? 'right' : 'left';
     const r0 = onAxis(across, this.size, ref.min[across.axis]!);
     const r1 = onAxis(across, this.size, ref.max[across.axis]!);
+    // A cut's sizes along the length go above or below the face or edge view, whichever is nearer the cut, so
+    // their extension lines do not cross the part; sizes across it stay on the left, keeping the
+    // view narrow; overall sizes below and to the right.
+    // The end view stands beside the face view, tops level: its sizes stay above so it grows no taller.
+    const low = view !== 'end' && (r0 + r1) / 2 < NEAR_LOW_SHARE * this.size[across.axis]!;
+    const side: DimensionRequest['side'] = extra.overall ? (horizontal ? 'below' : 'right') : horizontal ? (low ? 'below' : 'above') : 'left';
     const at = side === 'below' || side === 'left' ? Math.min(r0, r1) : Math.max(r0, r1);
     const key = `${view}|${horizontal}|${Math.min(a, b).toFixed(2)}|${Math.max(a, b).toFixed(2)}`;
     if (this.seen.has(key)) return;
