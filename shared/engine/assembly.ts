@@ -251,13 +251,15 @@ interface JointTally {
 }
 
 // Every instance of a part in a run, or none: a part half in runs has no sensible board order.
-function grainMatchOf(same: readonly PartDraft[]): { grainMatch?: readonly GrainMatch[] } {
-  if (!same.some((d) => d.grainMatch)) return {};
+function grainMatchOf(same: readonly PartDraft[]): readonly GrainMatch[] | null {
+  if (!same.some((d) => d.grainMatch)) return null;
   const runs = same.flatMap((d) => (d.grainMatch ? [d.grainMatch] : []));
-  if (runs.length === 0) return {};
   assert(runs.length === same.length, `part ${same[0]!.label}: every instance or none takes a grain-match run`);
-  return { grainMatch: runs };
+  return runs;
 }
+
+/** A part before its rough size and quantity, while `assemble` fills it in. */
+type PartBody = { -readonly [K in keyof Omit<Part, 'rough' | 'quantity'>]: Part[K] };
 
 /** Merges identical instances into parts and resolves joints to part ids. */
 export function assemble(drafts: readonly PartDraft[], joints: readonly JointDraft[], roughFor: RoughSizer): Assembled {
@@ -309,14 +311,17 @@ export function assemble(drafts: readonly PartDraft[], joints: readonly JointDra
     used.set(named.id, n);
     const id = n === 1 ? named.id : `${named.id}-${n}`;
     const name = n === 1 ? named.name : `${named.name} ${n}`;
-    const body = {
+    // Built up in place rather than by spreads, which V8 runs slowly: the optional fields
+    // before the rough size, which is worked out from the finished part.
+    const part: PartBody = {
       id, name, role: first.role, material: first.material, grain: first.grain,
       lengthMm: first.size[0], widthMm: first.size[1], thicknessMm: first.size[2],
       features, notes: first.notes,
-      ...(first.glueUp ? { glueUp: first.glueUp } : {}),
-      ...grainMatchOf(same),
     };
-    parts.push(Object.assign({}, body, { rough: roughFor(body), quantity: same.length }));
+    if (first.glueUp) part.glueUp = first.glueUp;
+    const runs = grainMatchOf(same);
+    if (runs) part.grainMatch = runs;
+    parts.push(Object.assign(part, { rough: roughFor(part), quantity: same.length }));
     same.forEach((draft, instance) => {
       partIdOf.set(draft, id);
       placements.push(placeInto(id, instance, draft.label, draft.size, chosen.get(draft)!.axes, draft.world, draft.explodeMm));

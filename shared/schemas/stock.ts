@@ -120,16 +120,37 @@ export const stockSettingsSchema = z
     for (const fit of fitProblems(stock)) ctx.addIssue({ code: 'custom', path: fit.path, message: fit.message, params: { limit: fit.limit } });
   }) satisfies z.ZodType<StockSettings>;
 
-/** The body of `PUT /workshops/:workshopId/stock`: the whole stock. */
-export const stockBody = stockSettingsSchema;
+/**
+ * The version of a workshop's stock a client read: the stored row's last-saved time to the
+ * microsecond, which every save moves forward. Clients treat it as an opaque token and send it
+ * back unchanged; null when the workshop has saved no stock yet (it reads the defaults).
+ */
+export const stockVersionSchema = z
+  .string({ error: 'must be the version the stock was read at (as GET returned it), or null for a workshop that has saved none' })
+  .regex(/^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}\.\d{6}Z$/, { message: 'must be the version the stock was read at, unchanged (as GET returned it)' })
+  .nullable();
 
-/** A workshop's stock as members read it; `updatedAt` is null when none has been saved (the defaults). */
+/**
+ * The body of `PUT /workshops/:workshopId/stock`: the whole stock and the version it was edited
+ * from. When the stored version has moved on, nothing is saved and the answer is a 409.
+ */
+export const stockBody = z.strictObject({
+  version: stockVersionSchema,
+  stock: stockSettingsSchema,
+});
+export type StockBody = z.infer<typeof stockBody>;
+
+/** A workshop's stock as members read it; `updatedAt` and `version` are null when none has been saved (the defaults). */
 export const stockResponse = z.object({
   stock: stockSettingsSchema,
   updatedAt: timestampSchema.nullable(),
   updatedBy: z.string().nullable(),
+  version: stockVersionSchema,
 });
 export type StockResponse = z.infer<typeof stockResponse>;
+
+/** 409 details when someone saved the stock since the version a save started from: the stock as it is now. */
+export const staleStockDetails = z.object({ current: stockResponse });
 
 /** The first thing wrong with a stock, as an InputError would name it: field path, message and limit. */
 export interface StockProblem {

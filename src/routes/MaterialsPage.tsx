@@ -12,7 +12,7 @@ import { SHEET_GOODS, isSheetGoodId } from '../../shared/wood/sheetGoods.ts';
 import { useDesign } from '../api/useDesign.ts';
 import { useMe } from '../api/useMe.ts';
 import { usePriceList } from '../api/usePriceList.ts';
-import { useSaveStock } from '../api/useSaveStock.ts';
+import { isStaleStock, useSaveStock } from '../api/useSaveStock.ts';
 import { useStock } from '../api/useStock.ts';
 import { BoardDiagramView } from '../components/BoardDiagramView.tsx';
 import { CostSummary } from '../components/CostSummary.tsx';
@@ -24,6 +24,7 @@ import { PriceListEditor } from '../components/PriceListEditor.tsx';
 import { SheetDiagramView } from '../components/SheetDiagramView.tsx';
 import { ShoppingListTable } from '../components/ShoppingListTable.tsx';
 import { StockBoardsTable } from '../components/StockBoardsTable.tsx';
+import { StockConflictNotice } from '../components/StockConflictNotice.tsx';
 import { StockOptionsForm } from '../components/StockOptionsForm.tsx';
 import { StockSaveBar } from '../components/StockSaveBar.tsx';
 import { TakeoffNumbers } from '../components/TakeoffNumbers.tsx';
@@ -110,22 +111,31 @@ function MaterialsBody({ result, workshopId, priceList, priceData, pricesError, 
   stockData: StockResponse | null; stockError: unknown; canEditStock: boolean;
 }) {
   // The form edits a draft of the workshop's stock; the layouts follow the draft, Save keeps it.
-  const [draft, setDraft] = useState<StockSettings | null>(null);
+  // The draft remembers the version it started from, so a save made meanwhile is a conflict.
+  const [draft, setDraft] = useState<{ stock: StockSettings; version: string | null } | null>(null);
   const [effort, setEffort] = useState<LayoutEffort>('standard');
   const saveStock = useSaveStock(workshopId);
-  const settings = draft ?? stockData?.stock ?? DEFAULT_STOCK_SETTINGS;
+  const settings = draft?.stock ?? stockData?.stock ?? DEFAULT_STOCK_SETTINGS;
   const problems = useMemo(() => stockProblems(settings), [settings]);
   const stockReady = stockData !== null || stockError != null;
   // A stock with a problem is not laid out: the last layouts stay until it is fixed.
   const { run, cancel, rerun } = useTakeoffRun(stockReady && problems.length === 0 ? result : null, settings, effort);
+  const conflict = isStaleStock(saveStock.error) ? saveStock.error : null;
   const edit = (next: StockSettings) => {
     saveStock.reset();
-    setDraft(next);
+    setDraft({ stock: next, version: draft ? draft.version : stockData?.version ?? null });
+  };
+  const save = (version: string | null) => {
+    if (draft) saveStock.mutate({ version, stock: draft.stock }, { onSuccess: () => setDraft(null) });
+  };
+  const discard = () => {
+    saveStock.reset();
+    setDraft(null);
   };
   const saveBar = (
     <StockSaveBar dirty={draft !== null} problemCount={problems.length} saving={saveStock.isPending} canEdit={canEditStock}
-      updatedAt={stockData?.updatedAt ?? null} updatedBy={stockData?.updatedBy ?? null} saveError={saveStock.error}
-      onSave={() => draft && saveStock.mutate(draft, { onSuccess: () => setDraft(null) })} onDiscard={() => { saveStock.reset(); setDraft(null); }} />
+      updatedAt={stockData?.updatedAt ?? null} updatedBy={stockData?.updatedBy ?? null} saveError={conflict ? null : saveStock.error}
+      onSave={() => draft && save(draft.version)} onDiscard={discard} />
   );
   const solidWoods = result.parts.flatMap((p) => (p.material.kind === 'solid' ? [{ speciesId: p.material.speciesId, quarters: p.rough.quarters }] : []));
   const [quantities, setQuantities] = useState<Record<string, number> | null>(null);
@@ -142,6 +152,9 @@ function MaterialsBody({ result, workshopId, priceList, priceData, pricesError, 
 
   return (
     <div className="grid gap-4 lg:grid-cols-[20rem_minmax(0,1fr)]">
+      {conflict && draft && (
+        <StockConflictNotice conflict={conflict} overwriting={saveStock.isPending} onLoadTheirs={discard} onOverwrite={() => save(conflict.current.version)} />
+      )}
       <aside className="no-print grid content-start gap-4" aria-label="Stock and hardware">
         <div className="card grid gap-2 p-3">
           <h2 className="text-sm font-semibold">Workshop stock</h2>

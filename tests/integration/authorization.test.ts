@@ -120,7 +120,8 @@ const CASES: Record<string, Case> = {
     success: 200,
     request: (w) => ({
       path: `/workshops/${w.workshopId}/stock`,
-      body: { ...DEFAULT_STOCK_SETTINGS, boardsInStock: [{ speciesId: 'white-oak', quarters: 4, lengthMm: 1829, widthMm: 178, defects: [{ kind: 'knot', fromEndMm: 900, fromEdgeMm: 60, lengthMm: 30, widthMm: 30 }] }] },
+      // A fresh world has no stock stored yet: the first save starts from version null.
+      body: { version: null, stock: { ...DEFAULT_STOCK_SETTINGS, boardsInStock: [{ speciesId: 'white-oak', quarters: 4, lengthMm: 1829, widthMm: 178, defects: [{ kind: 'knot', fromEndMm: 900, fromEdgeMm: 60, lengthMm: 30, widthMm: 30 }] }] } },
     }),
   },
   'get /dev/mail': { success: 200, request: () => ({ path: '/dev/mail' }) },

@@ -1,4 +1,7 @@
-/** `/api/workshops/:workshopId/stock`: members read it; owners and designers replace it whole. */
+/**
+ * `/api/workshops/:workshopId/stock`: members read it with its version; owners and designers
+ * replace it whole, naming the version they edited (a moved version is a 409 and saves nothing).
+ */
 import { stockBody } from '../../../shared/schemas/stock.ts';
 import { workshopIdParams } from '../../../shared/schemas/workshops.ts';
 import type { RouteDef } from '../../auth/access.ts';
@@ -7,7 +10,7 @@ import type { FeatureDeps } from '../context.ts';
 import { createStockService } from './stock.service.ts';
 
 export function stockRoutes(deps: FeatureDeps): RouteDef[] {
-  const service = createStockService(deps.sequelize, deps.models);
+  const service = createStockService(deps.sequelize);
   return [
     {
       method: 'get',
@@ -24,8 +27,8 @@ export function stockRoutes(deps: FeatureDeps): RouteDef[] {
       access: { kind: 'member', action: 'stock.manage', scope: 'workshop' },
       handler: async (req, res) => {
         const { workshopId } = workshopIdParams.parse(req.params);
-        const stock = stockBody.parse(req.body);
-        res.json(await service.replace(workshopId, stock, currentUser(req).id));
+        const { stock, version } = stockBody.parse(req.body);
+        res.json(await service.replace(workshopId, stock, version, currentUser(req).id));
       },
     },
   ];

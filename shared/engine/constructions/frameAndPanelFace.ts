@@ -6,10 +6,9 @@
  * case's outer face (so the face's parts sit at negative w).
  */
 import type { JointDraft, PartDraft } from '../assembly.ts';
-import { boxBetween } from '../geometry/box.ts';
 import type { FeatureDraft } from '../geometry/featureDescribe.ts';
 import { axisVector, type AxisMap } from '../geometry/placement.ts';
-import { wallBoxToWorld, wallDirToWorld, type WallFrame } from '../geometry/wallFrame.ts';
+import { wallBoxBetweenToWorld, wallDirToWorld, type WallFrame } from '../geometry/wallFrame.ts';
 import type { Box3, Material, Vec3 } from '../types.ts';
 import { wallPartNamer } from './naming.ts';
 
@@ -95,12 +94,11 @@ type WallDir = '+u' | '-u' | '+v' | '-v' | '+w' | '-w';
 /** A stop shorter than a nanometre is no stop: the groove runs out and the tongue has no haunch. */
 const MIN_CUT_MM = 1e-6;
 
-const box = (u0: number, u1: number, v0: number, v1: number, w0: number, w1: number): Box3 => boxBetween([u0, v0, w0], [u1, v1, w1]);
-
 /** Builds the rails, stiles and panels of one frame-and-panel face and the grooves its posts need. */
 export function frameAndPanelFace(o: FrameAndPanelFaceOptions): FrameAndPanelFace {
   const f = o.frame;
-  const toWorld = (b: Box3): Box3 => wallBoxToWorld(f, b);
+  // Boxes are drawn in wall coordinates, between two corners in any order, and kept in world ones.
+  const worldBox = (u0: number, u1: number, v0: number, v1: number, w0: number, w1: number): Box3 => wallBoxBetweenToWorld(f, u0, u1, v0, v1, w0, w1);
   const dir = (d: WallDir) => wallDirToWorld(f, d);
   // Rails and panels lie along u, up v, out w: a proper rotation with length → u.
   const railAxes: AxisMap = { length: f.u, width: '+Z', thickness: f.w };
@@ -139,19 +137,19 @@ export function frameAndPanelFace(o: FrameAndPanelFaceOptions): FrameAndPanelFac
     const haunchV: [number, number] = which === 'top' ? [v1 - stop, v1] : [v0, v0 + stop];
     const tongue = (end: 'a' | 'b'): FeatureDraft => {
       const [u0, u1] = end === 'a' ? [-tl, 0] : [span, span + tl];
-      const removed = [box(u0, u1, v0, v1, wIn, bandLo), box(u0, u1, v0, v1, bandHi, wOut)];
-      if (stop > 0) removed.push(box(u0, u1, haunchV[0], haunchV[1], bandLo, bandHi));
+      const removed = [worldBox(u0, u1, v0, v1, wIn, bandLo), worldBox(u0, u1, v0, v1, bandHi, wOut)];
+      if (stop > 0) removed.push(worldBox(u0, u1, haunchV[0], haunchV[1], bandLo, bandHi));
       return {
         id: `tongue-${end === 'a' ? 'left' : 'right'}`, idTemplate: 'tongue-{face}', type: 'tongue', label: 'stub tenon into the leg groove',
-        faceDir: dir(end === 'a' ? '-u' : '+u'), removed: removed.map(toWorld),
-        tongue: toWorld(box(u0, u1, tongueV[0], tongueV[1], bandLo, bandHi)),
+        faceDir: dir(end === 'a' ? '-u' : '+u'), removed,
+        tongue: worldBox(u0, u1, tongueV[0], tongueV[1], bandLo, bandHi),
       };
     };
     const groove: FeatureDraft = {
       id: 'groove-panel', type: 'groove', label: 'groove for the panels',
-      faceDir: dir(which === 'top' ? '-v' : '+v'), removed: [toWorld(box(-tl, span + tl, grooveV[0], grooveV[1], bandLo, bandHi))],
+      faceDir: dir(which === 'top' ? '-v' : '+v'), removed: [worldBox(-tl, span + tl, grooveV[0], grooveV[1], bandLo, bandHi)],
     };
-    const world = toWorld(box(-tl, span + tl, v0, v1, wIn, wOut));
+    const world = worldBox(-tl, span + tl, v0, v1, wIn, wOut);
     const features = [tongue('a'), tongue('b'), groove, ...(which === 'top' && o.topRailFeatures ? o.topRailFeatures(world) : [])];
     const draft: PartDraft = {
       group: `${o.groupId}/${which}-rail`, member: o.wall, label: `${o.wall} ${which} rail`,
@@ -185,18 +183,18 @@ export function frameAndPanelFace(o: FrameAndPanelFaceOptions): FrameAndPanelFac
       return {
         id: `tongue-${end}`, idTemplate: 'tongue-{face}', type: 'tongue', label: 'stub tenon into a rail groove',
         faceDir: dir(end === 'bottom' ? '-v' : '+v'),
-        removed: [box(us, ue, v0, v1, wIn, bandLo), box(us, ue, v0, v1, bandHi, wOut)].map(toWorld),
-        tongue: toWorld(box(us + fgd, ue - fgd, v0, v1, bandLo, bandHi)),
+        removed: [worldBox(us, ue, v0, v1, wIn, bandLo), worldBox(us, ue, v0, v1, bandHi, wOut)],
+        tongue: worldBox(us + fgd, ue - fgd, v0, v1, bandLo, bandHi),
       };
     };
     const grooves: FeatureDraft[] = [
-      { id: 'groove-left', idTemplate: 'groove-{face}', type: 'groove', label: 'groove for a panel', faceDir: dir('-u'), removed: [toWorld(box(us, us + fgd, s0, s1, bandLo, bandHi))] },
-      { id: 'groove-right', idTemplate: 'groove-{face}', type: 'groove', label: 'groove for a panel', faceDir: dir('+u'), removed: [toWorld(box(ue - fgd, ue, s0, s1, bandLo, bandHi))] },
+      { id: 'groove-left', idTemplate: 'groove-{face}', type: 'groove', label: 'groove for a panel', faceDir: dir('-u'), removed: [worldBox(us, us + fgd, s0, s1, bandLo, bandHi)] },
+      { id: 'groove-right', idTemplate: 'groove-{face}', type: 'groove', label: 'groove for a panel', faceDir: dir('+u'), removed: [worldBox(ue - fgd, ue, s0, s1, bandLo, bandHi)] },
     ];
     const draft: PartDraft = {
       group: `${o.groupId}/stile`, member: o.wall, label: `${o.wall} centre stile ${i + 1}`,
       role: 'stile', material: o.stock, grain: 'length',
-      size: [s1 - s0, o.stileWidthMm, T], axes: stileAxes, world: toWorld(box(us, ue, s0, s1, wIn, wOut)), explodeMm: explode(1),
+      size: [s1 - s0, o.stileWidthMm, T], axes: stileAxes, world: worldBox(us, ue, s0, s1, wIn, wOut), explodeMm: explode(1),
       features: [tongue('bottom'), tongue('top'), ...grooves], notes: [], name: namer('stile', 'centre stile'),
     };
     drafts.push(draft);
@@ -230,23 +228,24 @@ export function frameAndPanelFace(o: FrameAndPanelFaceOptions): FrameAndPanelFac
     const v0 = pz0 - fgd + gapV;
     const v1 = pz1 + fgd - gapV;
     const tongueLo = bandHi - tongueT;
+    // Rabbet and tongue of each edge, world boxes (mm).
     const edges: { id: string; side: WallDir; label: string; rabbet: Box3; tongue: Box3 }[] = [
-      { id: 'left', side: '-u', label: 'left edge', rabbet: box(u0, u0 + dL, v0, v1, pwIn, tongueLo), tongue: box(u0, b0, pz0, pz1, tongueLo, bandHi) },
-      { id: 'right', side: '+u', label: 'right edge', rabbet: box(u1 - dR, u1, v0, v1, pwIn, tongueLo), tongue: box(b1, u1, pz0, pz1, tongueLo, bandHi) },
-      { id: 'bottom', side: '-v', label: 'bottom edge', rabbet: box(u0, u1, v0, v0 + fgd, pwIn, tongueLo), tongue: box(b0, b1, v0, pz0, tongueLo, bandHi) },
-      { id: 'top', side: '+v', label: 'top edge', rabbet: box(u0, u1, v1 - fgd, v1, pwIn, tongueLo), tongue: box(b0, b1, pz1, v1, tongueLo, bandHi) },
+      { id: 'left', side: '-u', label: 'left edge', rabbet: worldBox(u0, u0 + dL, v0, v1, pwIn, tongueLo), tongue: worldBox(u0, b0, pz0, pz1, tongueLo, bandHi) },
+      { id: 'right', side: '+u', label: 'right edge', rabbet: worldBox(u1 - dR, u1, v0, v1, pwIn, tongueLo), tongue: worldBox(b1, u1, pz0, pz1, tongueLo, bandHi) },
+      { id: 'bottom', side: '-v', label: 'bottom edge', rabbet: worldBox(u0, u1, v0, v0 + fgd, pwIn, tongueLo), tongue: worldBox(b0, b1, v0, pz0, tongueLo, bandHi) },
+      { id: 'top', side: '+v', label: 'top edge', rabbet: worldBox(u0, u1, v1 - fgd, v1, pwIn, tongueLo), tongue: worldBox(b0, b1, pz1, v1, tongueLo, bandHi) },
     ];
     const rabbeted = p.thicknessMm > gw + 1e-9;
     const features: FeatureDraft[] = edges.flatMap((e) => {
       const tongue: FeatureDraft = {
         id: `tongue-${e.id}`, idTemplate: 'tongue-{face}', type: 'tongue', label: 'tongue into a groove', faceDir: dir(e.side),
-        removed: rabbeted ? [toWorld(e.rabbet)] : [], tongue: toWorld(e.tongue),
+        removed: rabbeted ? [e.rabbet] : [], tongue: e.tongue,
       };
       if (!rabbeted) return [tongue];
-      return [{ id: `rabbet-${e.id}`, idTemplate: 'rabbet-{face}', type: 'rabbet', label: 'rabbet from the inside face, leaving the tongue', faceDir: dir(e.side), removed: [toWorld(e.rabbet)] }, { ...tongue, removed: [] }];
+      return [{ id: `rabbet-${e.id}`, idTemplate: 'rabbet-{face}', type: 'rabbet', label: 'rabbet from the inside face, leaving the tongue', faceDir: dir(e.side), removed: [e.rabbet] }, { ...tongue, removed: [] }];
     });
     const horizontal = p.grain !== 'vertical';
-    const world = toWorld(box(u0, u1, v0, v1, pwIn, bandHi));
+    const world = worldBox(u0, u1, v0, v1, pwIn, bandHi);
     const draft: PartDraft = {
       group: `${o.groupId}/panel`, member: o.wall, label: `${o.wall} panel ${j + 1}`,
       role: 'panel', material: p.material, grain: p.grain === 'none' ? 'none' : 'length',
@@ -271,7 +270,7 @@ export function frameAndPanelFace(o: FrameAndPanelFaceOptions): FrameAndPanelFac
 
   const postGrooves: PostGroove[] = (['left', 'right'] as const).map((end) => ({
     end,
-    box: toWorld(end === 'left' ? box(-o.postGrooveDepthMm, 0, zb0 + stop, zt1 - stop, bandLo, bandHi) : box(span, span + o.postGrooveDepthMm, zb0 + stop, zt1 - stop, bandLo, bandHi)),
+    box: end === 'left' ? worldBox(-o.postGrooveDepthMm, 0, zb0 + stop, zt1 - stop, bandLo, bandHi) : worldBox(span, span + o.postGrooveDepthMm, zb0 + stop, zt1 - stop, bandLo, bandHi),
     faceDir: dir(end === 'left' ? '+u' : '-u'),
     widthMm: gw,
     depthMm: o.postGrooveDepthMm,

@@ -48,6 +48,32 @@ export function wallBoxToWorld(frame: WallFrame, box: Box3): Box3 {
   };
 }
 
+/**
+ * `wallBoxToWorld` of the wall box between corners (u0, v0, w0) and (u1, v1, w1) in any order
+ * (mm), without making the wall box first: walls draw dozens of boxes on each rebuild.
+ */
+export function wallBoxBetweenToWorld(frame: WallFrame, u0: number, u1: number, v0: number, v1: number, w0: number, w1: number): Box3 {
+  const o = frame.origin;
+  const u = axisVector(frame.u);
+  const w = axisVector(frame.w);
+  const pu = Math.min(u0, u1);
+  const pv = Math.min(v0, v1);
+  const pw = Math.min(w0, w1);
+  const qu = Math.max(u0, u1);
+  const qv = Math.max(v0, v1);
+  const qw = Math.max(w0, w1);
+  const ax = o[0] + pu * u[0] + pw * w[0];
+  const ay = o[1] + pu * u[1] + pw * w[1];
+  const az = o[2] + pv + pu * u[2] + pw * w[2];
+  const bx = o[0] + qu * u[0] + qw * w[0];
+  const by = o[1] + qu * u[1] + qw * w[1];
+  const bz = o[2] + qv + qu * u[2] + qw * w[2];
+  return {
+    min: [Math.min(ax, bx), Math.min(ay, by), Math.min(az, bz)],
+    max: [Math.max(ax, bx), Math.max(ay, by), Math.max(az, bz)],
+  };
+}
+
 /** The world direction of a wall direction. */
 export function wallDirToWorld(frame: WallFrame, dir: '+u' | '-u' | '+v' | '-v' | '+w' | '-w'): WorldAxis {
   switch (dir) {
