@@ -3,6 +3,7 @@
  * engine's derived outputs — nothing here recomputes what the engine already knows.
  */
 import type { PieceResult } from '../engine/types.ts';
+import { featureFaceText, featureKindText, featureSizeText } from './featureText.ts';
 import { lengthText, type DrawingUnits } from './lengthText.ts';
 import type { FlowBlock, TableBlock } from './types.ts';
 
@@ -36,12 +37,18 @@ export function cutListBlocks(result: PieceResult, units: DrawingUnits, letters:
 export function joineryBlock(result: PieceResult, units: DrawingUnits): TableBlock {
   const names = new Map(result.parts.map((p) => [p.id, p.name]));
   const name = (id: string): string => names.get(id) ?? id;
+  // The cut in the drawing's units, read from the part's own feature (the engine's summary is in mm).
+  const features = new Map(result.parts.flatMap((p) => p.features.map((f) => [`${p.id}|${f.id}`, f] as const)));
+  const cutText = (partId: string, featureId: string): string | null => {
+    const f = features.get(`${partId}|${featureId}`);
+    return f ? `${featureKindText(f).toLowerCase()} on ${featureFaceText(f)}, ${featureSizeText(f, units)}` : null;
+  };
   const rows: string[][] = result.derived.joinery.length
     ? result.derived.joinery.map((j) => [
         j.type,
         `${name(j.parts[0])} → ${name(j.parts[1])}`,
         String(j.count),
-        j.features.map((f) => `${name(f.partId)}: ${f.summary}`).join('\n'),
+        j.features.map((f) => `${name(f.partId)}: ${cutText(f.partId, f.featureId) ?? f.summary}`).join('\n'),
         j.setUps.map((s) => `${s.tool}: ${s.settings.map((x) => `${x.name} ${lengthText(x.valueMm, units)}`).join(', ')}${s.note ? ` (${s.note})` : ''}`).join('\n'),
         lengthText(j.clearanceMm, units),
         j.floating ? 'no — floats' : j.glued ? 'yes' : 'no',
