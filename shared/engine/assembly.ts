@@ -248,6 +248,8 @@ interface JointTally {
   clearance: number;
   first: JointDraft;
   count: number;
+  /** How many joints before this one join the same two parts with the same type. */
+  ordinal: number;
 }
 
 // Every instance of a part in a run, or none: a part half in runs has no sensible board order.
@@ -348,16 +350,16 @@ export function assemble(drafts: readonly PartDraft[], joints: readonly JointDra
       existing.count++;
       continue;
     }
-    const tally: JointTally = { type: j.type, a, b, aFeatures, bFeatures, clearance, first: j, count: 1 };
+    // Joints of one type between the same two parts but other features are numbered.
+    let ordinal = 0;
+    if (sameA) for (const t of sameA) if (t.b === b && t.type === j.type) ordinal++;
+    const tally: JointTally = { type: j.type, a, b, aFeatures, bFeatures, clearance, first: j, count: 1, ordinal };
     tallies.push(tally);
     if (sameA) sameA.push(tally);
     else byFirstPart.set(a, [tally]);
   }
-  const seen = new Map<string, number>();
-  const jointList: Joint[] = tallies.map(({ type, a, b, aFeatures, bFeatures, first, count }) => {
+  const jointList: Joint[] = tallies.map(({ type, a, b, aFeatures, bFeatures, first, count, ordinal: n }) => {
     const base = `${a}:${b}:${type}`;
-    const n = seen.get(base) ?? 0;
-    seen.set(base, n + 1);
     return {
       id: n === 0 ? base : `${base}:${n + 1}`,
       type,

@@ -151,9 +151,10 @@ export function buildChest(spec: PieceSpec, layout?: ChestLayout): ChestBuild {
   const screws: BattenScrew[] = Array.from({ length: screwCount }, (_, i) => {
     const y = lay.battenYRange[1] - BATTEN_SCREW_INSET_MM - ((battenLength - 2 * BATTEN_SCREW_INSET_MM) * i) / (screwCount - 1);
     const distance = Math.max(0, lay.hingeLineYMm - y);
-    if (!p.battenSlots) return { yMm: y, distanceFromFixedLineMm: distance, slotLengthMm: p.screwDiameter, screwFromNearEndMm: p.screwDiameter / 2 };
+    // The screw nearest the hinge line fixes the batten: a round hole, whatever the lid does.
+    if (!p.battenSlots || i === 0) return { yMm: y, distanceFromFixedLineMm: distance, slotLengthMm: p.screwDiameter, screwFromNearEndMm: p.screwDiameter / 2 };
     const slot = fastenerSlotMm({ distanceFromFixedLineMm: distance, species: species.id, sawn: 'unknown', climate, shankDiameterMm: p.screwDiameter });
-    return i === 0 || !slot.needsSlot
+    return !slot.needsSlot
       ? { yMm: y, distanceFromFixedLineMm: distance, slotLengthMm: p.screwDiameter, screwFromNearEndMm: p.screwDiameter / 2 }
       : { yMm: y, distanceFromFixedLineMm: distance, slotLengthMm: slot.slotLengthMm, screwFromNearEndMm: slot.screwFromNearEndMm };
   });
