@@ -147,7 +147,8 @@ export function webFrame(o: WebFrameOptions): WebFrame {
     const draft = plainPart({
       group: 'web-frame/runner', member: `runner-${i}`, label: `web frame ${o.index + 1} runner ${i + 1}`, role: 'runner', material: o.material, grain: 'length',
       world: boxBetween([xr[0], ry[0], z0], [xr[1], ry[1], z1]), axes: { length: '+Y', width: '-X', thickness: '+Z' },
-      explodeMm: [0, 0, o.explodeMm * 0.3], features, name: fixedName('web-frame-runner', 'Web-frame runner'), notes: ['Wax the top where a drawer side rides.'],
+      explodeMm: [0, 0, o.explodeMm * 0.3], features, notes: ['Wax the top where a drawer side rides.'],
+      name: i === 0 || i === last ? fixedName('web-frame-runner', 'Web-frame runner') : fixedName('web-frame-centre-runner', 'Web-frame centre runner'),
     });
     for (const [end, railDraft] of [['front', frontRail], ['back', backRail]] as const) {
       joints.push({

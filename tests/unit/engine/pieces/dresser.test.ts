@@ -159,14 +159,14 @@ describe('buildPiece (dresser), web frames worked by hand', () => {
   it('tenons the runners into the rails and floats a dust panel in each bay', () => {
     // Runners: from 95.25 − 6.35 + 1.5875 to 426.244 + 6.35 − 1.5875 (back rail from the back's
     // front face 502.444 less 76.2) = 340.519 mm; a side runner 38.1 + 6.35 in its dado = 44.45 wide.
-    const runners = r.parts.filter((p) => p.id.startsWith('web-frame-runner'));
+    const runners = r.parts.filter((p) => p.role === 'runner');
     expect(runners.reduce((n, p) => n + p.quantity, 0)).toBe(6);
     runners.forEach((p) => within(p.lengthMm, 340.519));
     // The left and right side runners are one part turned end for end: four of them.
     within(part(r, 'web-frame-runner').widthMm, 44.45);
     expect(part(r, 'web-frame-runner').quantity).toBe(4);
     // The runner under the divider reaches under both drawers' sides: 18.256 + 2 × (12.7 + 12.7) = 69.056.
-    expect(runners.some((p) => Math.abs(p.widthMm - 69.056) < MM_TOLERANCE)).toBe(true);
+    within(part(r, 'web-frame-centre-runner').widthMm, 69.056);
     // Panel: bay 56.356–676.672 (the centre runner at 711.2 ± 34.528), plus 2 × (6.35 − 1.5875) = 629.841 by 340.519.
     const panel = part(r, 'dust-panel');
     expect(panel.quantity).toBe(4);
@@ -210,7 +210,7 @@ describe('buildPiece (dresser) web-frame options', () => {
     const r = dresser({ slideType: 'wood-runners' });
     const rides = r.joints.filter((j) => j.type === 'drawer-slide' && j.members[0].partId === 'row-1-drawer-side');
     expect(rides.length).toBeGreaterThan(0);
-    expect(rides.every((j) => j.members[1].partId.startsWith('web-frame-runner'))).toBe(true);
+    expect(rides.every((j) => /^web-frame-(centre-)?runner$/.test(j.members[1].partId))).toBe(true);
     expect(r.checks.filter((c) => c.severity === 'error' || c.severity === 'warning')).toEqual([]);
   });
 
