@@ -1,12 +1,17 @@
 /**
- * `casewright layout path/to/spec.json [--sheet 48x96in] [--kerf 1/8in] [--trim 1/4in]
- * [--units in|mm] [--json]`, or `casewright layout --parts parts.csv ...`: lays the parts out
- * on boards and sheets and prints the sheets and boards, every placement and the yield.
+ * `casewright layout path/to/spec.json [--stock stock.json] [--sheet 48x96in] [--kerf 1/8in]
+ * [--trim 1/4in] [--units in|mm] [--json]`, or `casewright layout --parts parts.csv ...`: lays
+ * the parts out on boards and sheets and prints the sheets and boards, every placement and the
+ * yield.
  *
  * A parts file has a header row with the columns `name, quantity, length, width, thickness,
  * material` (a species id or a sheet-good id) and optionally `grain` (length, width or none:
  * which way a sheet part's face grain runs; default none). Lengths are in a maker's notation,
  * bare numbers in `--units`.
+ *
+ * A stock file is a workshop's stock as JSON, in the shape the stock API returns or accepts
+ * (the stock alone, or wrapped as `{ "stock": { ... } }`), lengths in mm; boards on hand are cut
+ * first and around their defects. `--sheet`, `--kerf` and `--trim` override its values.
  */
 import { readFileSync } from 'node:fs';
 import Papa from 'papaparse';
@@ -16,7 +21,9 @@ import { layoutBoards } from '../../../shared/layout/boardOptimiser.ts';
 import type { BoardPartInput } from '../../../shared/layout/boardTypes.ts';
 import { layoutSheets } from '../../../shared/layout/sheetOptimiser.ts';
 import type { FaceGrain, SheetPartInput, SheetStock } from '../../../shared/layout/sheetTypes.ts';
-import { materialsTakeoff, type MaterialsTakeoff } from '../../../shared/materials/takeoff.ts';
+import { DEFECT_NAMES, takeoffOptionsFor, type StockSettings } from '../../../shared/materials/stockSettings.ts';
+import { materialsTakeoff, type MaterialsTakeoff, type TakeoffOptions } from '../../../shared/materials/takeoff.ts';
+import { stockProblem } from '../../../shared/schemas/stock.ts';
 import { formatLength } from '../../../shared/units/format.ts';
 import { MM_PER_INCH, type LengthUnit } from '../../../shared/units/length.ts';
 import { parseLength } from '../../../shared/units/parse.ts';
@@ -29,6 +36,7 @@ import type { RegisterCommand } from './index.ts';
 
 interface LayoutOptions {
   parts?: string;
+  stock?: string;
   sheet?: string;
   kerf?: string;
   trim?: string;
@@ -47,8 +55,56 @@ export function sheetSizeOption(text: string): SheetStock {
   return { id: 'sheet', name: `Sheet ${formatLength(widthMm, { unit })} × ${formatLength(lengthMm, { unit })}`, lengthMm, widthMm, count: null, offcut: false };
 }
 
-/** Reads a parts CSV into the takeoff's shape, laying each material out on its own. */
-export function takeoffFromPartsCsv(text: string, units: LengthUnit, sheet: SheetStock | undefined, kerf: { kerfMm?: number; trimMm?: number }): MaterialsTakeoff {
+/**
+ * Reads a workshop's stock from the JSON text of a stock file: the stock alone, or wrapped in
+ * `stock` as the stock API returns it (`{ stock, updatedAt, updatedBy, version }`) or accepts it
+ * (`{ version, stock }`); the wrapper's other fields are not read. Checked whole by
+ * `stockSettingsSchema`: a bad value throws an InputError naming its place in the file.
+ */
+export function stockFromJson(text: string, file: string): StockSettings {
+  let value: unknown;
+  try {
+    value = JSON.parse(text.replace(/^\uFEFF/, ''));
+  } catch (error) {
+    throw new InputError('--stock', `"${file}" is not JSON (${error instanceof Error ? error.message : String(error)})`, 'a JSON object');
+  }
+  if (typeof value !== 'object' || value === null || Array.isArray(value)) {
+    throw new InputError('--stock', `"${file}" must hold one JSON object: the stock, or { "stock": { ... } } as the stock API returns it`, 'a JSON object');
+  }
+  const wrapped = Object.hasOwn(value, 'stock');
+  const stock: unknown = wrapped ? (value as { stock: unknown }).stock : value;
+  const problem = stockProblem(stock);
+  if (problem) {
+    const field = problem.field === 'stock' ? (wrapped ? 'stock' : '') : `${wrapped ? 'stock.' : ''}${problem.field}`;
+    throw new InputError(`--stock ${field}`.trim(), problem.message, problem.limit);
+  }
+  return stock as StockSettings;
+}
+
+/** The stock file at `path` (relative to where the user ran the command), read and checked. */
+function readStockFile(path: string): StockSettings {
+  let text: string;
+  try {
+    text = readFileSync(fromUserCwd(path), 'utf8');
+  } catch {
+    throw new InputError('--stock', `cannot read "${path}"`, 'a readable JSON file');
+  }
+  return stockFromJson(text, path);
+}
+
+/**
+ * The takeoff options from a stock file with `--sheet`, `--kerf` and `--trim` laid over it; a
+ * value that no longer fits with an override (an offcut the trim leaves nothing of) is named.
+ */
+function takeoffOptionsFromStock(stock: StockSettings, sheet: SheetStock | undefined, kerf: { kerfMm?: number; trimMm?: number }): TakeoffOptions {
+  const settings: StockSettings = { ...stock, ...(sheet ? { sheetLengthMm: sheet.lengthMm, sheetWidthMm: sheet.widthMm } : {}), ...kerf };
+  const problem = stockProblem(settings);
+  if (problem) throw new InputError(`--stock ${problem.field} (with --sheet, --kerf and --trim applied)`, problem.message, problem.limit);
+  return takeoffOptionsFor(settings);
+}
+
+/** Reads a parts CSV into the takeoff's shape, laying each material out on its own with `options`' stock, kerf and trim. */
+export function takeoffFromPartsCsv(text: string, units: LengthUnit, options: TakeoffOptions = {}): MaterialsTakeoff {
   const parsed = Papa.parse<Record<string, string>>(text.replace(/^\uFEFF/, ''), { header: true, skipEmptyLines: 'greedy', transformHeader: (h) => h.trim().toLowerCase() });
   for (const column of ['name', 'quantity', 'length', 'width', 'thickness', 'material']) {
     if (!parsed.meta.fields?.includes(column)) throw new InputError('--parts', `the header must name the columns name, quantity, length, width, thickness, material (missing ${column})`, 'a header row');
@@ -80,8 +136,25 @@ export function takeoffFromPartsCsv(text: string, units: LengthUnit, sheet: Shee
       throw new InputError(`${at} material`, `"${material}" is neither a species id nor a sheet-good id`, 'a species or sheet-good id');
     }
   });
-  const boards = [...solid.values()].map((g) => ({ speciesId: g.speciesId, speciesName: getSpecies(g.speciesId).name, quarters: g.quarters, layout: layoutBoards(g.parts, { quarters: g.quarters, ...(kerf.kerfMm === undefined ? {} : { kerfMm: kerf.kerfMm }) }) }));
-  const sheetTakeoffs = [...sheets.entries()].map(([sheetId, parts]) => ({ sheetId, sheetName: getSheetGood(sheetId).name, layout: layoutSheets(parts, { ...(sheet ? { stock: [sheet] } : {}), ...kerf }) }));
+  const kerf = options.kerfMm === undefined ? {} : { kerfMm: options.kerfMm };
+  const boards = [...solid.values()].map((g) => {
+    const layout = layoutBoards(g.parts, {
+      quarters: g.quarters,
+      ...kerf,
+      ...(options.boardStock ? { stock: options.boardStock(g.speciesId, g.quarters) } : {}),
+      ...(options.boardAttempts === undefined ? {} : { attempts: options.boardAttempts }),
+    });
+    return { speciesId: g.speciesId, speciesName: getSpecies(g.speciesId).name, quarters: g.quarters, layout };
+  });
+  const sheetTakeoffs = [...sheets.entries()].map(([sheetId, parts]) => {
+    const layout = layoutSheets(parts, {
+      ...kerf,
+      ...(options.trimMm === undefined ? {} : { trimMm: options.trimMm }),
+      ...(options.sheetStock ? { stock: options.sheetStock(sheetId) } : {}),
+      ...(options.sheetAttempts === undefined ? {} : { attempts: options.sheetAttempts }),
+    });
+    return { sheetId, sheetName: getSheetGood(sheetId).name, layout };
+  });
   return {
     boards,
     sheets: sheetTakeoffs,
@@ -111,6 +184,7 @@ export function takeoffLines(takeoff: MaterialsTakeoff, units: LengthUnit): stri
     lines.push(`${b.speciesName} ${b.quarters}/4: ${l.boards.length} board${l.boards.length === 1 ? '' : 's'}, ${l.boardFeetBought.toFixed(2)} bd ft bought, ${l.boardFeetRough.toFixed(2)} in rough parts, ${l.boardFeetFinished.toFixed(2)} in finished parts`);
     l.boards.forEach((plan, i) => {
       lines.push(`  board ${i + 1} (${plan.stockName}${plan.inStock ? ', in stock' : ''}), ${plan.boardFeet.toFixed(2)} bd ft, yield ${pct(plan.yield)}`);
+      for (const d of plan.defects) lines.push(`    cut around ${d.note ?? DEFECT_NAMES.other}: ${len(d.startMm)} to ${len(d.endMm)} from the end${d.fromEdgeMm === undefined ? '' : `, ${len(d.fromEdgeMm)} to ${len(d.toEdgeMm ?? plan.widthMm)} from the edge`}`);
       for (const p of plan.parts) lines.push(`    ${p.name} #${p.instance + 1}: ${len(p.length)} × ${len(p.width)} rough at (${len(p.x)}, ${len(p.y)})${p.matchGroup ? `, ${p.matchOrder !== null ? `grain-matched run ${p.matchLabel ?? p.matchGroup}, place ${p.matchOrder}` : `match group ${p.matchGroup}`}` : ''}`);
     });
     for (const w of l.splitWarnings) lines.push(`  GRAIN MATCH SPLIT: ${w.message}`);
@@ -120,17 +194,33 @@ export function takeoffLines(takeoff: MaterialsTakeoff, units: LengthUnit): stri
   return lines;
 }
 
+const STOCK_FILE_HELP = `
+Stock file (--stock): one JSON object, lengths in millimetres. Either the stock alone or, as
+GET /api/workshops/:workshopId/stock returns it, wrapped as { "stock": { ... }, ... }.
+  sheetLengthMm, sheetWidthMm   the sheet size for sale (length along the face grain)
+  offcuts        [{ sheetId, lengthMm, widthMm, count }]   used before a sheet is bought
+  boardLengthsMm, boardWidthsMm the board sizes for sale: every length in every width
+  boardsInStock  [{ label?, speciesId, quarters, lengthMm, widthMm, defects }]   boards on hand,
+                 cut before any is bought; quarters is the stock thickness (4 for 4/4)
+    defects      [{ kind: knot | check | other, fromEndMm, fromEdgeMm, lengthMm, widthMm }]
+                 from the board's end and edge to the defect's near side, and its size
+  kerfMm, trimMm the saw's kerf and the trim off each sheet edge
+Every field is required and checked; a bad one is named (e.g. boardsInStock[0].defects[1].lengthMm)
+and nothing is laid out. --sheet, --kerf and --trim override the file's values.`;
+
 export const registerLayout: RegisterCommand = (program) => {
   program
     .command('layout')
     .description('Lay a piece (or a list of parts) out on boards and sheets: sheets, placements and yield.')
     .argument('[spec]', 'a spec file (JSON) or a piece kind')
     .option('--parts <file>', 'a CSV list of parts instead of a spec: name, quantity, length, width, thickness, material[, grain]')
-    .option('--sheet <size>', 'sheet size for sale, e.g. 48x96in or 1220x2440mm (default 48x96in)')
-    .option('--kerf <length>', 'saw kerf, e.g. 1/8in (default 1/8in)')
-    .option('--trim <length>', 'trim off each sheet edge, e.g. 1/4in (default 1/4in)')
+    .option('--stock <file>', 'a workshop stock file (JSON, lengths in mm, as the stock API returns or accepts it): boards on hand are cut first and around their defects; see below')
+    .option('--sheet <size>', 'sheet size for sale, e.g. 48x96in or 1220x2440mm (default 48x96in, or the stock file\'s)')
+    .option('--kerf <length>', 'saw kerf, e.g. 1/8in (default 1/8in, or the stock file\'s)')
+    .option('--trim <length>', 'trim off each sheet edge, e.g. 1/4in (default 1/4in, or the stock file\'s)')
     .option('--units <unit>', 'units for the report and for bare numbers in the parts file: in or mm', 'in')
     .option('--json', 'print the takeoff as JSON, lengths in mm')
+    .addHelpText('after', STOCK_FILE_HELP)
     .action((specPath: string | undefined, opts: LayoutOptions) => {
       const units = choiceOption(opts.units, '--units', ['in', 'mm'] as const);
       const sheet = opts.sheet === undefined ? undefined : sheetSizeOption(opts.sheet);
@@ -138,6 +228,10 @@ export const registerLayout: RegisterCommand = (program) => {
         ...(opts.kerf === undefined ? {} : { kerfMm: lengthOption(opts.kerf, '--kerf', { allowZero: true, max: 20 }) }),
         ...(opts.trim === undefined ? {} : { trimMm: lengthOption(opts.trim, '--trim', { allowZero: true, max: 100 }) }),
       };
+      // Everything is read and checked before anything is laid out or printed.
+      const options: TakeoffOptions = opts.stock === undefined
+        ? { ...kerf, ...(sheet ? { sheetStock: () => [sheet] } : {}) }
+        : takeoffOptionsFromStock(readStockFile(opts.stock), sheet, kerf);
       let takeoff: MaterialsTakeoff;
       if (opts.parts !== undefined) {
         if (specPath !== undefined) throw new InputError('--parts', 'give either a spec or --parts, not both', 'one source of parts');
@@ -147,11 +241,11 @@ export const registerLayout: RegisterCommand = (program) => {
         } catch {
           throw new InputError('--parts', `cannot read "${opts.parts}"`, 'a readable CSV file');
         }
-        takeoff = takeoffFromPartsCsv(text, units, sheet, kerf);
+        takeoff = takeoffFromPartsCsv(text, units, options);
       } else {
         if (specPath === undefined) throw new InputError('spec', 'give a spec file or --parts parts.csv', 'a spec or a parts list');
         const result = buildPiece(specFromArguments(specPath, [], units));
-        takeoff = materialsTakeoff(result, { ...kerf, ...(sheet ? { sheetStock: () => [sheet] } : {}) });
+        takeoff = materialsTakeoff(result, options);
       }
       if (opts.json) printJson(takeoff);
       else printLines(takeoffLines(takeoff, units));
