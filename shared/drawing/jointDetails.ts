@@ -68,7 +68,8 @@ function sectionOf(f: Feature, size: readonly [number, number, number]): Section
       const across = extent(m, p) >= extent(m, q) ? q : p;
       sizes.push([across, m.min[across]!, m.max[across]!, 0], [n, m.min[n]!, m.max[n]!, 0]);
       edges(across, m, 1);
-      return { view: viewShowing(across, n), box: m, sizes, smallest: Math.min(f.widthMm, f.depthMm), key: `${f.type}|${f.widthMm.toFixed(1)}|${f.depthMm.toFixed(1)}|${f.offsetMm.toFixed(1)}` };
+      // Offsets are not part of the key: like grooves at different places share a detail of their section.
+      return { view: viewShowing(across, n), box: m, sizes, smallest: Math.min(f.widthMm, f.depthMm), key: `${f.type}|${f.face}|${f.widthMm.toFixed(1)}|${f.depthMm.toFixed(1)}` };
     }
     case 'rabbet': {
       const m = f.removed[0];
@@ -172,8 +173,13 @@ export function jointDetails(part: Part, units: DrawingUnits, viewScales: Readon
     const section = sectionOf(f, size);
     if (!section || section.smallest / viewScales[section.view] >= DETAIL_MIN_PAPER_MM) continue;
     const seen = sections.get(section.key);
-    if (seen) seen.count++;
-    else sections.set(section.key, { section, f, count: 1 });
+    if (!seen) sections.set(section.key, { section, f, count: 1 });
+    else {
+      seen.count++;
+      // Alike cuts at different offsets: the detail shows their section; where each is, the part's views say.
+      const offsets = (x: Section) => JSON.stringify(x.sizes.filter((z) => z[3] === 1).map((z) => z.map((v) => v.toFixed(1))));
+      if (offsets(seen.section) !== offsets(section)) seen.section = { ...seen.section, sizes: seen.section.sizes.filter((z) => z[3] === 0) };
+    }
   }
   const chosen = joinTouching([...sections.values()].sort((a, b) => a.section.smallest - b.section.smallest), partViewAxes(up)).slice(0, MAX_DETAILS);
   const axesOf = partViewAxes(up);
