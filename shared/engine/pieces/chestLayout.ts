@@ -128,13 +128,14 @@ export function chestLayout(p: ChestParams, climate: Climate): ChestLayout {
   };
   const battenYRange: [number, number] = [inner.front + BATTEN_END_CLEARANCE_MM, inner.back - BATTEN_END_CLEARANCE_MM];
   const openingHeightMm = panelZ[1] - panelZ[0];
+  const frontBack = wallFloat(p, climate, bayXMm, openingHeightMm);
+  // Only panels with vertical grain move across their bay; the others move up and down the
+  // same opening in every wall, so the sides share the front's float.
+  const side = p.panelMaterial === 'solid' && p.panelGrain === 'vertical' ? wallFloat(p, climate, bayYMm, openingHeightMm) : frontBack;
   return {
     p, L, T, hingeGapMm, legLengthMm, spanXMm, spanYMm, frontInsetMm, sideInsetMm, backInsetMm, inner, panelZ,
     bayXMm, bayYMm, panelThicknessMm, panelSheetName: sheet?.name ?? null, bottomThicknessMm,
     hingeLineYMm, hingeCentresX, lidRecessMm, railRecessMm, lidBox, battenYRange,
-    floats: {
-      frontBack: wallFloat(p, climate, bayXMm, openingHeightMm),
-      side: wallFloat(p, climate, bayYMm, openingHeightMm),
-    },
+    floats: { frontBack, side },
   };
 }
