@@ -7,19 +7,41 @@
 import type { GlueUpStage, Part, PieceKind } from '../types.ts';
 import { caseGlueUpStages } from './caseGlueUp.ts';
 
-const ids = (parts: readonly Part[], test: (p: Part) => boolean): string[] => parts.filter(test).map((p) => p.id);
 const isSide = (p: Part): boolean => p.id.startsWith('side-') || p.id.startsWith('left-') || p.id.startsWith('right-');
 const isFrontBack = (p: Part): boolean => /^(front|back)(-back)?-/.test(p.id) && (p.role === 'rail' || p.role === 'stile' || p.role === 'panel');
 
 /** Glue-up stages for a built piece of `kind`. */
 export function glueUpStages(kind: PieceKind, parts: readonly Part[]): GlueUpStage[] {
   if (kind !== 'chest') return caseGlueUpStages(parts);
-  const glued = parts.filter((p) => p.glueUp);
-  const sideFrame = ids(parts, (p) => isSide(p) && (p.role === 'rail' || p.role === 'stile'));
-  const sidePanels = ids(parts, (p) => isSide(p) && p.role === 'panel');
-  const frontBackFrame = ids(parts, (p) => isFrontBack(p) && p.role !== 'panel');
-  const frontBackPanels = ids(parts, (p) => isFrontBack(p) && p.role === 'panel');
-  const legs = ids(parts, (p) => p.role === 'leg');
+  // One pass sorting part ids into the stages' lists, each in part order: this runs on every
+  // rebuild, and a filter per list read every part a dozen times.
+  const glued: Part[] = [];
+  const sideFrame: string[] = [];
+  const sidePanels: string[] = [];
+  const frontBackFrame: string[] = [];
+  const frontBackPanels: string[] = [];
+  const legs: string[] = [];
+  const cleats: string[] = [];
+  const bottoms: string[] = [];
+  const lidAndBattens: string[] = [];
+  const lidAndBackRails: string[] = [];
+  const lids: string[] = [];
+  for (const p of parts) {
+    if (p.glueUp) glued.push(p);
+    const side = isSide(p);
+    const frontBack = isFrontBack(p);
+    const frame = p.role === 'rail' || p.role === 'stile';
+    if (side && frame) sideFrame.push(p.id);
+    if (side && p.role === 'panel') sidePanels.push(p.id);
+    if (frontBack && p.role !== 'panel') frontBackFrame.push(p.id);
+    if (frontBack && p.role === 'panel') frontBackPanels.push(p.id);
+    if (p.role === 'leg') legs.push(p.id);
+    if (p.role === 'cleat') cleats.push(p.id);
+    if (p.role === 'bottom') bottoms.push(p.id);
+    if (p.role === 'batten' || p.role === 'lid') lidAndBattens.push(p.id);
+    if (p.role === 'lid' || (p.id.startsWith('back-') && p.role === 'rail')) lidAndBackRails.push(p.id);
+    if (p.role === 'lid') lids.push(p.id);
+  }
   return [
     {
       stage: 1, title: 'Panels from boards, and the two end assemblies',
@@ -37,18 +59,18 @@ export function glueUpStages(kind: PieceKind, parts: readonly Part[]): GlueUpSta
     {
       stage: 3, title: 'Cleats and bottom',
       steps: [
-        { title: 'Glue and screw the cleats inside the bottom rails', partIds: ids(parts, (p) => p.role === 'cleat'), notes: ['Cleat tops level with each other so the bottom sits flat.'] },
-        { title: 'Drop the bottom in onto the cleats', partIds: ids(parts, (p) => p.role === 'bottom'), notes: ['No glue: screw it to the cleats if it must not lift.'] },
+        { title: 'Glue and screw the cleats inside the bottom rails', partIds: cleats, notes: ['Cleat tops level with each other so the bottom sits flat.'] },
+        { title: 'Drop the bottom in onto the cleats', partIds: bottoms, notes: ['No glue: screw it to the cleats if it must not lift.'] },
       ],
-      floatingPartIds: ids(parts, (p) => p.role === 'bottom'),
+      floatingPartIds: bottoms.slice(),
     },
     {
       stage: 4, title: 'Lid battens and hinges',
       steps: [
-        { title: 'Screw the battens to the lid through their slots', partIds: ids(parts, (p) => p.role === 'batten' || p.role === 'lid'), notes: ['Screws at the centre of each slot; glue, if any, only at the back screw.'] },
-        { title: 'Hang the lid on its hinges', partIds: ids(parts, (p) => p.role === 'lid' || p.id.startsWith('back-') && p.role === 'rail'), notes: ['Fit the lid support and check that it holds the lid open in any position.'] },
+        { title: 'Screw the battens to the lid through their slots', partIds: lidAndBattens, notes: ['Screws at the centre of each slot; glue, if any, only at the back screw.'] },
+        { title: 'Hang the lid on its hinges', partIds: lidAndBackRails, notes: ['Fit the lid support and check that it holds the lid open in any position.'] },
       ],
-      floatingPartIds: ids(parts, (p) => p.role === 'lid'),
+      floatingPartIds: lids,
     },
   ];
 }
