@@ -1,13 +1,16 @@
 /**
  * Boards on hand, as a maker enters one: on the demo chest's Materials page the owner adds a
  * white-oak board with a knot, saves, reloads and finds it kept for the workshop, and sees the
- * layout cut that board around the knot. The demo workshop's stock is put back afterwards, and
+ * layout cut that board around the knot. When the designer saves the stock while the owner is
+ * editing it, the owner's Save is refused with a notice naming who saved it and when, and the
+ * owner saves over it or loads theirs. The demo workshop's stock is put back afterwards, and
  * the demo reviewer (the client) then finds the stock read-only.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { existsSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Page } from 'playwright-core';
+import { QueryTypes } from 'sequelize';
 import { rectsOverlap } from '../../shared/layout/rect.ts';
 import type { StockSettings } from '../../shared/materials/stockSettings.ts';
 import { seedDemo } from '../../server/db/seed.ts';
@@ -17,6 +20,7 @@ import { startTestServer } from '../support/testApp.ts';
 const demo = JSON.parse(readFileSync('server/db/demo-accounts.json', 'utf8')) as { password: string; accounts: { role: string; email: string }[] };
 const owner = demo.accounts.find((a) => a.role === 'owner')!;
 const reviewer = demo.accounts.find((a) => a.role === 'reviewer')!;
+const designer = demo.accounts.find((a) => a.role === 'designer')!;
 const CHEST_TITLE = 'Blanket chest, white oak';
 const LABEL = 'Rack 7 wide oak';
 const IN = 25.4;
@@ -47,7 +51,8 @@ afterAll(async () => {
 async function restoreStock(): Promise<number> {
   const status = await page.evaluate(async ({ id, stock }) => {
     const { csrfToken } = await (await fetch('/api/auth/csrf')).json();
-    return (await fetch(`/api/workshops/${id}/stock`, { method: 'PUT', headers: { 'Content-Type': 'application/json', 'x-csrf-token': csrfToken }, body: JSON.stringify(stock) })).status;
+    const { version } = await (await fetch(`/api/workshops/${id}/stock`)).json();
+    return (await fetch(`/api/workshops/${id}/stock`, { method: 'PUT', headers: { 'Content-Type': 'application/json', 'x-csrf-token': csrfToken }, body: JSON.stringify({ version, stock }) })).status;
   }, { id: workshopId, stock: original });
   original = null;
   return status;
@@ -147,6 +152,51 @@ describe('Boards on hand', () => {
     for (const part of boxes.parts) expect(rectsOverlap(part!, boxes.knot!)).toBe(false);
     await figure.scrollIntoViewIfNeeded();
     await shot('materials-board-with-knot');
+  });
+
+  it('names who saved the stock while the owner was editing, then saves the owner\'s over it or loads theirs', async () => {
+    const rows = await server.sequelize.query<{ id: string; name: string }>('SELECT id, name FROM users WHERE email = :email', { type: QueryTypes.SELECT, replacements: { email: designer.email } });
+    const { id: designerId, name: designerName } = rows[0]!;
+    // The designer's save, made elsewhere while the owner's draft is open: straight to the row, as the API would write it.
+    const designerSaves = (trimMm: number) => server.sequelize.query(
+      `UPDATE workshop_stock SET stock = jsonb_set(stock, '{trimMm}', to_jsonb(:trimMm::numeric)), updated_by = :designerId, updated_at = clock_timestamp() WHERE workshop_id = :workshopId`,
+      { replacements: { trimMm, designerId, workshopId } },
+    );
+    const notice = page.getByRole('alertdialog', { name: new RegExp(`^${designerName} saved the stock at .+ while you were editing$`) });
+    const kerf = async (text: string) => {
+      await page.getByLabel('Kerf').fill(text);
+      await page.getByLabel('Kerf').press('Enter');
+      await page.getByTestId('stock-save-bar').first().getByText('Unsaved changes').waitFor();
+    };
+    await page.reload();
+    await page.locator('figure.board-diagram').first().waitFor();
+    const before = await readStock();
+
+    await kerf('1/16 in');
+    await designerSaves(5);
+    await page.getByRole('button', { name: 'Save stock' }).first().click();
+    await notice.waitFor();
+    expect((await readStock()).trimMm).toBe(5);
+    await shot('materials-stock-conflict');
+    await notice.getByRole('button', { name: 'Save mine over theirs' }).click();
+    await notice.waitFor({ state: 'detached' });
+    await page.getByTestId('stock-save-bar').first().getByText('Saved for the workshop').waitFor();
+    const mine = await readStock();
+    // The whole draft replaced theirs: the owner's kerf, and the trim as the owner's page had it.
+    expect(Math.abs(mine.kerfMm - IN / 16)).toBeLessThan(MM_TOLERANCE);
+    expect(mine.trimMm).toBe(before.trimMm);
+
+    await kerf('3/32 in');
+    await designerSaves(4);
+    await page.getByRole('button', { name: 'Save stock' }).first().click();
+    await notice.waitFor();
+    await notice.getByRole('button', { name: 'Load theirs (drop my changes)' }).click();
+    await notice.waitFor({ state: 'detached' });
+    expect(await page.getByTestId('stock-save-bar').first().innerText()).toContain(`by ${designerName}`);
+    expect(await page.getByTestId('stock-save-bar').first().getByText('Unsaved changes').count()).toBe(0);
+    const theirs = await readStock();
+    expect(theirs.trimMm).toBe(4);
+    expect(Math.abs(theirs.kerfMm - IN / 16)).toBeLessThan(MM_TOLERANCE);
   });
 
   it('shows the stock to the client read-only: no Save, no Add, fields disabled', async () => {
