@@ -125,19 +125,6 @@ export function layoutView(model: ModelView, scale: number, scaleLabel: string):
   const toPaper = (p: Pt): Pt => pt((p[0] - b.x) / scale, (b.y + b.h - p[1]) / scale);
   const geometry: Rect = { x: 0, y: 0, w: b.w / scale, h: b.h / scale };
   const primitives: Primitive[] = model.primitives.map((p) => mapPrimitive(p, toPaper, scale));
-  if (model.notes?.length) {
-    const corners = (r: Rect): Rect => {
-      const [x0, y1] = toPaper([r.x, r.y]);
-      const [x1, y0] = toPaper([r.x + r.w, r.y + r.h]);
-      return { x: x0, y: y0, w: x1 - x0, h: y1 - y0 };
-    };
-    const rectsOf = (keep: (p: Primitive) => boolean) => primitives.filter(keep).map(primitiveRect);
-    primitives.push(...placeNotes(
-      model.notes.map((n) => ({ text: n.text, target: corners(n.target) })),
-      { features: rectsOf((p) => p.type === 'circle' || p.type === 'polygon'), texts: rectsOf((p) => p.type === 'label'), lines: rectsOf((p) => p.type === 'segment') },
-      geometry,
-    ));
-  }
 
   const rows: Record<Side, Row[]> = { below: [], above: [], left: [], right: [] };
   const tierStart: Record<Side, number> = { below: 0, above: 0, left: 0, right: 0 };
@@ -186,6 +173,25 @@ export function layoutView(model: ModelView, scale: number, scaleLabel: string):
     texts.push(req.key ? { text: req.text, key: req.key } : { text: req.text });
   }
 
+  // Notes last, so they keep clear of the dimensions' lines and texts as well as the features.
+  if (model.notes?.length) {
+    const corners = (r: Rect): Rect => {
+      const [x0, y1] = toPaper([r.x, r.y]);
+      const [x1, y0] = toPaper([r.x + r.w, r.y + r.h]);
+      return { x: x0, y: y0, w: x1 - x0, h: y1 - y0 };
+    };
+    const rectsOf = (keep: (p: Primitive) => boolean) => primitives.filter(keep).map(primitiveRect);
+    primitives.push(...placeNotes(
+      model.notes.map((n) => ({ text: n.text, target: corners(n.target) })),
+      {
+        features: rectsOf((p) => p.type === 'circle' || p.type === 'polygon'),
+        texts: rectsOf((p) => p.type === 'label'),
+        lines: rectsOf((p) => p.type === 'segment' && (p.kind === 'visible' || p.kind === 'hidden')),
+        thinLines: rectsOf((p) => p.type === 'arrow' || (p.type === 'segment' && p.kind !== 'visible' && p.kind !== 'hidden')),
+      },
+      geometry,
+    ));
+  }
   const extent = rectUnion([geometry, ...primitives.map(primitiveRect)]);
   const titleY = extent.y + extent.h + TITLE_GAP_MM;
   const title = `${model.title.toUpperCase()}   ${scaleLabel}`;

@@ -1,8 +1,9 @@
 /**
  * Setting feature notes (a hole's size, a slot's width) on paper. A note written over the holes
  * it names hides them, so it goes beside its target, trying nearer places first, and is kept
- * clear of every hole, slot and text; inside the part and clear of its lines when there is room,
- * else outside. A note that has to stand off gets a leader to its target.
+ * clear of every hole, slot and text: clear of every line too, inside the part when there is
+ * room there, else outside it; only failing both does it cross a line. A note that has to stand
+ * off gets a leader to its target.
  */
 import { inflate, rectsOverlap } from './rects.ts';
 import { capHeightMm, textWidthMm } from './textMetrics.ts';
@@ -15,14 +16,18 @@ export interface Occupied {
   texts: readonly Rect[];
   /** Part lines: avoided when there is room. */
   lines: readonly Rect[];
+  /** Centre, break and other thin lines: avoided before part lines are given up on. */
+  thinLines: readonly Rect[];
 }
 
 /** Size of a feature note, pt. */
 export const NOTE_TEXT_PT = 6.5;
 /** Distances from the target tried, nearest first, paper mm. */
-const STANDOFFS_MM = [1, 2, 3.5, 5, 7, 9, 12, 15, 19, 24, 30];
+const STANDOFFS_MM = [1, 2, 3.5, 5, 7, 9, 12, 15, 19, 24, 30, 38, 48];
 /** Clear space kept round a note, paper mm. */
 const CLEAR_MM = 0.6;
+/** Length of a leader's arrowhead, paper mm. */
+const LEADER_ARROW_MM = 1.8;
 /** A note further than this from its target gets a leader, paper mm. */
 const LEADER_FROM_MM = 2.5;
 
@@ -59,7 +64,7 @@ function nearestIn(r: Rect, p: Pt): Pt {
  * avoided when a place inside the part allows it.
  */
 export function placeNotes(notes: readonly PaperNote[], occupied: Occupied, geometry: Rect): Primitive[] {
-  const { features, lines } = occupied;
+  const { features, lines, thinLines } = occupied;
   const texts = [...occupied.texts];
   const out: Primitive[] = [];
   const h = capHeightMm(NOTE_TEXT_PT);
@@ -70,8 +75,10 @@ export function placeNotes(notes: readonly PaperNote[], occupied: Occupied, geom
       return avoid.every((a) => !rectsOverlap(grown, a));
     };
     const tries: ((r: Rect) => boolean)[] = [
-      (r) => within(r, geometry) && free(r, [...features, ...texts, ...lines]),
-      (r) => within(r, geometry) && free(r, [...features, ...texts]),
+      (r) => within(r, geometry) && free(r, [...features, ...texts, ...lines, ...thinLines]),
+      (r) => free(r, [...features, ...texts, ...lines, ...thinLines]),
+      (r) => within(r, geometry) && free(r, [...features, ...texts, ...thinLines]),
+      (r) => free(r, [...features, ...texts, ...thinLines]),
       (r) => free(r, [...features, ...texts]),
     ];
     let spot: { rect: Rect; d: number } | null = null;
@@ -92,9 +99,17 @@ export function placeNotes(notes: readonly PaperNote[], occupied: Occupied, geom
     texts.push(rect);
     if (spot.d > LEADER_FROM_MM) {
       const centre = (r: Rect): Pt => [r.x + r.w / 2, r.y + r.h / 2];
-      const from = nearestIn(note.target, centre(rect));
-      const to = nearestIn(inflate(rect, 0.4), centre(note.target));
-      out.push({ type: 'segment', a: from, b: to, kind: 'thin' }, { type: 'arrow', tip: from, from: to });
+      const t = note.target;
+      const round = Math.abs(t.w - t.h) < 0.01;
+      const [cx, cy] = centre(t);
+      const [tx, ty] = centre(rect);
+      const d = Math.hypot(tx - cx, ty - cy) || 1;
+      // A leader ends on a hole's circle, else on the feature's outline.
+      const from: Pt = round ? [cx + ((tx - cx) / d) * (t.w / 2), cy + ((ty - cy) / d) * (t.w / 2)] : nearestIn(t, [tx, ty]);
+      const to = nearestIn(inflate(rect, 1), from);
+      const len = Math.hypot(to[0] - from[0], to[1] - from[1]) || 1;
+      const back: Pt = [from[0] + ((to[0] - from[0]) / len) * LEADER_ARROW_MM, from[1] + ((to[1] - from[1]) / len) * LEADER_ARROW_MM];
+      out.push({ type: 'segment', a: from, b: to, kind: 'thin' }, { type: 'arrow', tip: from, from: back });
     }
   }
   return out;
