@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { DEFAULT_STOCK_SETTINGS, type StockSettings } from '../../../shared/materials/stockSettings.ts';
-import { MAX_KERF_MM, stockProblem, stockProblems, stockSettingsSchema } from '../../../shared/schemas/stock.ts';
+import { MAX_KERF_MM, stockBody, stockProblem, stockProblems, stockSettingsSchema } from '../../../shared/schemas/stock.ts';
 
 const IN = 25.4;
 
@@ -70,5 +70,26 @@ describe('stockSettingsSchema', () => {
     const parsed = stockSettingsSchema.parse({ ...withBoards(), boardsInStock: [{ ...withBoards().boardsInStock[1]!, label: '  A2 ' }] });
     expect(parsed.boardsInStock[0]?.label).toBe('A2');
     expect(parsed.boardsInStock[0]?.lengthMm).toBe(72 * IN);
+  });
+});
+
+describe('stockBody', () => {
+  it('takes the stock with the version it was read at, or null for a workshop that has saved none', () => {
+    expect(stockBody.safeParse({ version: '2026-11-30T16:20:00.123456Z', stock: DEFAULT_STOCK_SETTINGS }).success).toBe(true);
+    expect(stockBody.safeParse({ version: null, stock: DEFAULT_STOCK_SETTINGS }).success).toBe(true);
+  });
+
+  it('names version when it is missing, a number, or not as the API wrote it (milliseconds only)', () => {
+    for (const version of [undefined, 3, 'latest', '2026-11-30T16:20:00.123Z']) {
+      const parsed = stockBody.safeParse({ version, stock: DEFAULT_STOCK_SETTINGS });
+      expect(parsed.success, String(version)).toBe(false);
+      expect(parsed.error?.issues[0]?.path, String(version)).toEqual(['version']);
+      expect(parsed.error?.issues[0]?.message, String(version)).toMatch(/^must be the version the stock was read at/);
+    }
+  });
+
+  it('names a bad stock field under stock', () => {
+    const parsed = stockBody.safeParse({ version: null, stock: { ...DEFAULT_STOCK_SETTINGS, kerfMm: MAX_KERF_MM + 1 } });
+    expect(parsed.error?.issues[0]?.path).toEqual(['stock', 'kerfMm']);
   });
 });
