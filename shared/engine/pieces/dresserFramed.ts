@@ -2,8 +2,9 @@
  * The dresser built like the chest: four corner legs from the floor to the underside of the
  * top, frame-and-panel sides and back made by the chest's own frame-and-panel face, and between
  * the front legs a web frame under each row of drawers (front and back rails tenoned into the
- * legs, runners tenoned into the rails). Drawers ride on the runners; the top is screwed up
- * through the top web frame, fixed at the front and slotted at the back.
+ * legs, runners tenoned into the rails). Drawers ride on the runners, or on metal slides screwed
+ * to spacers on the runners that bring the mounting face out to the legs' inner faces; the top is
+ * screwed up through the top web frame, fixed at the front and slotted at the back.
  */
 import { InputError } from '../../errors.ts';
 import type { Climate } from '../../wood/climate.ts';
@@ -18,13 +19,14 @@ import { drawerBox, drawerNamer } from '../constructions/drawerBox.ts';
 import { frameAndPanelFace, type FacePanelSpec } from '../constructions/frameAndPanelFace.ts';
 import { frontGrainMatch, frontGrid, type FrameWidths, type FrontGrid } from '../constructions/frontGrid.ts';
 import { plainPart } from '../constructions/plainPart.ts';
-import { SLIDE_RULES } from '../constructions/slides.ts';
+import { SLIDE_SPACER_HEIGHT_MM, slideSpacers, type SlideSpacerPlacement } from '../constructions/slideSpacers.ts';
+import { SLIDE_RULES, slideLengthFor } from '../constructions/slides.ts';
 import { webFrame } from '../constructions/webFrame.ts';
 import { boxBetween, boxSize, boxUnion } from '../geometry/box.ts';
 import type { FeatureDraft } from '../geometry/featureDescribe.ts';
 import type { WallFrame } from '../geometry/wallFrame.ts';
 import type { Check, Material } from '../types.ts';
-import { drawerFitChecks, drawerTravelCheck } from '../checks/drawerFit.ts';
+import { drawerFitChecks, drawerTravelCheck, undermountSetUpCheck } from '../checks/drawerFit.ts';
 import { frontClearanceChecks, legAndRailRevealChecks, revealChecks } from '../checks/fronts.ts';
 import { railTongueCheck, stoppedGrooveCheck } from '../checks/joinery.ts';
 import { panelFloatCheck } from '../checks/panelFloat.ts';
@@ -68,6 +70,8 @@ export interface FramedLayout {
   panel: { thicknessMm: number; sheet: boolean };
   floats: { side: { across: number; groove: number; float: PanelFloat }; back: { across: number; groove: number; float: PanelFloat } };
   drawers: { row: number; col: number; opening: { x: [number, number]; z: [number, number] }; box: { x: [number, number]; y: [number, number]; z: [number, number] }; availableDepthMm: number }[];
+  /** Spacers the metal slides screw to, each row's left to right; none on wooden runners. */
+  spacers: SlideSpacerPlacement[];
 }
 
 function wallFloat(p: P, climate: Climate, spanMm: number, count: number, openingHeightMm: number): { across: number; groove: number; float: PanelFloat } {
@@ -116,7 +120,6 @@ export function framedLayout(p: P, top: TopPlan, drawers: DrawerPlan, rows: numb
   const L = p.legSize;
   const T = p.stockThickness;
   const gw = p.grooveWidth;
-  if (drawers.slide !== 'wood-runners') fail('slideType', 'a frame-and-panel dresser carries its drawers on web-frame runners', 'wood-runners for a frame-and-panel case');
   if (2 * L + 2 * MIN_OPENING_MM > p.width) fail('legSize', `legs of ${r(L)} mm leave no room between them in a ${r(p.width)} mm width`, `at most ${r((p.width - 2 * MIN_OPENING_MM) / 2)} mm`);
   if (T > L) fail('stockThickness', `rails ${r(T)} mm thick are thicker than the legs`, `at most ${r(L)} mm`);
   if (gw >= T - 2) fail('grooveWidth', `a ${r(gw)} mm groove leaves no walls in ${r(T)} mm stock`, `at most ${r(T - 2)} mm`);
@@ -158,6 +161,7 @@ export function framedLayout(p: P, top: TopPlan, drawers: DrawerPlan, rows: numb
   const grid = meetOverRails(frontGrid({ x: [0, p.width], z, frame, rowHeightsMm: heights, columns, leaves: 1, mount: p.frontMount, revealMm: p.reveal, overlayMm: p.overlay, gapMm: p.frontGap, frontThicknessMm: p.frontThickness }), p, frame);
   const bands: [number, number][] = [[legLengthMm - T, legLengthMm], ...grid.rows.map((row) => [row[0] - T, row[0]] as [number, number])];
 
+  // The runners are laid out for wooden runners whatever the slide: on slides they carry the spacers.
   const c = SLIDE_RULES['wood-runners'].sideClearanceMm;
   const st = drawers.sideThicknessMm;
   const reach = c + st + SHOULDER_MM + MIN_TENON_MM;
@@ -169,20 +173,47 @@ export function framedLayout(p: P, top: TopPlan, drawers: DrawerPlan, rows: numb
   const backRailY: [number, number] = [inner.back - rd, inner.back];
   const inset = p.frontMount === 'inset';
   const y0 = inset ? p.frontThickness : 0;
+  const runners = drawers.slide === 'wood-runners';
+  // On slides the box stands the slide's clearance in from each side of the opening, which the spacers make flush.
+  const slideGap = SLIDE_RULES[drawers.slide].sideClearanceMm;
+  const availableDepthMm = inner.back - y0 - drawers.rearClearanceMm;
+  const length = drawers.depthMm > 0 ? drawers.depthMm : slideLengthFor(drawers.slide, availableDepthMm);
+  if (length === null) fail('depth', `the case leaves ${r(availableDepthMm)} mm for the drawers, less than the shortest ${drawers.slide} slide`, `deep enough for a ${r(SLIDE_RULES[drawers.slide].lengthsMm![0]!)} mm slide, or wooden runners`);
+  if (length < 2 * st + 25.4) fail(drawers.depthMm > 0 ? 'drawerDepth' : 'depth', `a ${r(length)} mm drawer is too shallow`, `at least ${r(2 * st + 25.4)} mm`);
   const drawersOut = grid.cells.map((cell) => {
-    const bx: [number, number] = [cell.x[0] + c, cell.x[1] - c];
-    const bz: [number, number] = [cell.z[0], cell.z[1] - drawers.topClearanceMm];
-    const availableDepthMm = inner.back - y0 - drawers.rearClearanceMm;
-    const length = drawers.depthMm > 0 ? drawers.depthMm : availableDepthMm;
-    if (length < 2 * st + 25.4) fail('depth', 'the drawers would be too shallow', 'deeper');
+    const bx: [number, number] = [cell.x[0] + slideGap, cell.x[1] - slideGap];
+    const bz: [number, number] = [runners ? cell.z[0] : cell.z[0] + drawers.bottomClearanceMm, cell.z[1] - drawers.topClearanceMm];
+    const where = `row ${cell.row + 1}${columns > 1 ? `, column ${cell.col + 1}` : ''}`;
+    if (bx[1] - bx[0] < 4 * st + 25.4) fail('drawerSideThickness', `the drawer box in ${where} would be only ${r(bx[1] - bx[0])} mm wide`, 'thinner drawer sides, or wider openings');
     if (bz[1] - bz[0] < drawers.bottomSetUpMm + 25.4 + 6) fail('drawerTopClearance', 'the drawer boxes would be too short for their bottoms', 'smaller, or taller rows');
     return { row: cell.row, col: cell.col, opening: { x: cell.x, z: cell.z }, box: { x: bx, y: [y0, y0 + length] as [number, number], z: bz }, availableDepthMm };
   });
   if (drawers.bottomGrooveDepthMm > st / 2 + 1e-9) fail('drawerBottomGroove', 'the groove cuts more than half through the drawer stock', `at most ${r(st / 2)} mm`);
+  const spacers = runners ? [] : spacerLayout(p, L, T, inner, grid, y0 + length);
   return {
     L, T, legLengthMm, insetMm, inner, grid, frame, bands, runnersX, backRailY,
-    panel: { thicknessMm: panelT, sheet: p.panelMaterial === 'plywood' }, floats, drawers: drawersOut,
+    panel: { thicknessMm: panelT, sheet: p.panelMaterial === 'plywood' }, floats, drawers: drawersOut, spacers,
   };
+}
+
+/**
+ * The slide spacers of each row (world mm), standing on the web frame under it. At the sides a
+ * strip fills the step from the side frame's inner face to the legs' inner faces (the rails sit
+ * centred on the legs, so the step is half of leg less rail thickness); it runs from the back of
+ * the front leg, where the slide's front end screws to the leg itself, to the slide's back end,
+ * stopping at the back leg. Between columns a block as wide as the mullion runs from behind it.
+ */
+function spacerLayout(p: P, L: number, T: number, inner: FramedLayout['inner'], grid: FrontGrid, slideEndY: number): SlideSpacerPlacement[] {
+  const columns = grid.columns.length;
+  const sideEndY = Math.min(slideEndY, p.depth - L);
+  if (sideEndY - L < 25.4) fail('drawerDepth', `the slides end ${r(slideEndY)} mm from the front, leaving their spacers no length behind the ${r(L)} mm legs`, `a drawer depth of at least ${r(L + 25.4)} mm, or 0 for the longest slide that fits`);
+  return grid.rows.flatMap((row, ri) => {
+    const z: [number, number] = [row[0], row[0] + Math.min(SLIDE_SPACER_HEIGHT_MM, row[1] - row[0])];
+    const out: SlideSpacerPlacement[] = [{ row: ri, boundary: 0, kind: 'side', x: [inner.left, L], y: [L, sideEndY], z }];
+    for (let k = 1; k < columns; k++) out.push({ row: ri, boundary: k, kind: 'centre', x: [grid.columns[k - 1]![1], grid.columns[k]![0]], y: [T, slideEndY], z });
+    out.push({ row: ri, boundary: columns, kind: 'side', x: [p.width - L, inner.right], y: [L, sideEndY], z });
+    return out;
+  });
 }
 
 /** Builds the framed dresser. */
@@ -272,6 +303,12 @@ export function buildFramedDresser(p: P, top: TopPlan, d: DrawerPlan, rows: numb
   drafts.push(...topBuilt.drafts);
   joints.push(...topBuilt.joints);
 
+  // Spacers for metal slides, on the runners of the web frame under each row.
+  const spacers = slideSpacers({ spacers: lay.spacers, material: solid, runnerUnder: (row, boundary) => frames[row + 1]!.runners[boundary]!, explodeMm: explodeMm * 0.2 });
+  drafts.push(...spacers.drafts);
+  joints.push(...spacers.joints);
+  const rule = SLIDE_RULES[d.slide];
+
   // Drawers on the web frames; fronts wider than the widest board are glued up, as on the carcass dresser.
   const glueUpFor = (widthMm: number) => {
     if (widthMm <= p.maxBoardWidth) return {};
@@ -301,7 +338,9 @@ export function buildFramedDresser(p: P, top: TopPlan, d: DrawerPlan, rows: numb
     joints.push(...box.joints, { type: 'front-screwed', a: { draft: front, featureIds: [] }, b: { draft: box.front, featureIds: [] }, clearanceMm: 0, glued: false, floating: false, note: 'Screwed from inside the box.' });
     const frame = frames[dl.row + 1]!;
     for (const [i, side] of [[0, dl.col], [1, dl.col + 1]] as const) {
-      joints.push({ type: 'drawer-slide', a: { draft: box.sides[i]!, featureIds: [] }, b: { draft: frame.runners[side]!, featureIds: [] }, clearanceMm: SLIDE_RULES['wood-runners'].sideClearanceMm, glued: false, floating: false, note: SLIDE_RULES['wood-runners'].note });
+      const support = d.slide === 'wood-runners' ? frame.runners[side]! : spacers.at(dl.row, side);
+      const note = d.slide === 'wood-runners' ? rule.note : `${rule.note} The slide screws to the spacer behind the leg or mullion, and at its front end to the leg or mullion.`;
+      joints.push({ type: 'drawer-slide', a: { draft: box.sides[i]!, featureIds: [] }, b: { draft: support, featureIds: [] }, clearanceMm: rule.sideClearanceMm, glued: false, floating: false, note });
     }
     fronts.push({ facts: { id: `drawer-${dl.row + 1}-${dl.col + 1}`, label: `drawer front (${where})`, partIds: [], kind: 'drawer', hinge: 'left', x: fb.x, z: fb.z, thicknessMm: p.frontThickness }, draft: front });
     fitFacts.push({ where, drafts: [front, ...box.drafts], dl });
@@ -317,9 +356,10 @@ export function buildFramedDresser(p: P, top: TopPlan, d: DrawerPlan, rows: numb
     ...stoppedGrooveCheck(idsOf([...renamed.values()]), p.legGrooveStop),
     ...fitFacts.flatMap((f) => drawerFitChecks({
       id: `${f.dl.row + 1}-${f.dl.col + 1}`, where: f.where, partIds: idsOf(f.drafts), openingHeightMm: f.dl.opening.z[1] - f.dl.opening.z[0],
-      boxHeightMm: f.dl.box.z[1] - f.dl.box.z[0], availableDepthMm: f.dl.availableDepthMm, boxDepthMm: f.dl.box.y[1] - f.dl.box.y[0], slide: 'wood-runners', rule: SLIDE_RULES['wood-runners'],
+      boxHeightMm: f.dl.box.z[1] - f.dl.box.z[0], availableDepthMm: f.dl.availableDepthMm, boxDepthMm: f.dl.box.y[1] - f.dl.box.y[0], slide: d.slide, rule,
     })),
-    ...drawerTravelCheck(fitFacts.map((f) => ({ partIds: idsOf(f.drafts), boxDepthMm: f.dl.box.y[1] - f.dl.box.y[0] })), 'wood-runners'),
+    ...undermountSetUpCheck(idsOf(fitFacts.flatMap((f) => f.drafts.filter((x) => x.role === 'drawer-side'))), d.slide, d.bottomSetUpMm),
+    ...drawerTravelCheck(fitFacts.map((f) => ({ partIds: idsOf(f.drafts), boxDepthMm: f.dl.box.y[1] - f.dl.box.y[0] })), d.slide),
     ...(p.frontMount === 'inset'
       ? revealChecks(idsOf(fronts.map((f) => f.draft)), lay.frame, p.frontMount, p.reveal, p.overlay, rows, columns)
       : legAndRailRevealChecks(idsOf(fronts.map((f) => f.draft)), lay.frame, p.overlay, p.frontGap, framedOverlayLaps(p, lay.frame), rows, columns)),
