@@ -205,7 +205,7 @@ GET /api/workshops/:workshopId/stock returns it, wrapped as { "stock": { ... }, 
     defects      [{ kind: knot | check | other, fromEndMm, fromEdgeMm, lengthMm, widthMm }]
                  from the board's end and edge to the defect's near side, and its size
   kerfMm, trimMm the saw's kerf and the trim off each sheet edge
-Every field is required and checked; a bad one is named (e.g. boardsInStock[0].defects[1].lengthMm)
+Every field but label is required and checked; a bad one is named (e.g. boardsInStock[0].defects[1].lengthMm)
 and nothing is laid out. --sheet, --kerf and --trim override the file's values.`;
 
 export const registerLayout: RegisterCommand = (program) => {
