@@ -163,15 +163,11 @@ export function checkSpecForBuild(spec: unknown): CheckedSpec {
       throw new InputError(key, `is not a ${String(s.kind)} parameter; known parameters: ${keys}`, keys);
     }
   }
-  const checked: Record<string, ParamValue> = {};
+  const params: Record<string, ParamValue> = {};
   for (const def of defs) {
     const value = (given as Record<string, unknown>)[def.key];
-    checked[def.key] = value === undefined ? def.default : checkValue(def, value);
+    params[def.key] = value === undefined ? def.default : checkValue(def, value);
   }
-  // Sixty properties stored by computed key leave an object in V8's slow dictionary mode; a
-  // spread copy is a plain fast object of one shared shape, which the builders read by name
-  // hundreds of times per build.
-  const params = { ...checked };
   const climate = s.climate === undefined ? climateOf(DEFAULT_CLIMATE) : checkClimate(readClimate(s.climate));
   const worked = combinations(params, climate);
   const out: PieceSpec = { schemaVersion: 1, kind: s.kind as PieceKind, params, climate };
