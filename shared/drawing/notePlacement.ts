@@ -53,6 +53,8 @@ const PLACES: readonly Place[] = [
 
 const within = (r: Rect, area: Rect): boolean => r.x >= area.x && r.y >= area.y && r.x + r.w <= area.x + area.w && r.y + r.h <= area.y + area.h;
 
+const withinAcross = (r: Rect, area: Rect): boolean => r.x >= area.x && r.x + r.w <= area.x + area.w;
+
 /** The point of `r` nearest `p`. */
 function nearestIn(r: Rect, p: Pt): Pt {
   return [Math.min(Math.max(p[0], r.x), r.x + r.w), Math.min(Math.max(p[1], r.y), r.y + r.h)];
@@ -76,6 +78,8 @@ export function placeNotes(notes: readonly PaperNote[], occupied: Occupied, geom
     };
     const tries: ((r: Rect) => boolean)[] = [
       (r) => within(r, geometry) && free(r, [...features, ...texts, ...lines, ...thinLines]),
+      // Outside, above or below the part first: a note beside a long part would widen the view.
+      (r) => withinAcross(r, geometry) && free(r, [...features, ...texts, ...lines, ...thinLines]),
       (r) => free(r, [...features, ...texts, ...lines, ...thinLines]),
       (r) => within(r, geometry) && free(r, [...features, ...texts, ...thinLines]),
       (r) => free(r, [...features, ...texts, ...thinLines]),
