@@ -218,8 +218,11 @@ function MaterialsBody({ result, workshopId, priceList, priceData, pricesError, 
                 {takeoff.boards.map((b) => (
                   <div key={`${b.speciesId}:${b.quarters}`} className="grid gap-2">
                     <h3 className="text-sm font-semibold">{b.speciesName} {b.quarters}/4</h3>
-                    {b.layout.splitGroups.length > 0 && (
-                      <p className="text-xs text-pencil">Grain match split: {b.layout.splitGroups.length} group{b.layout.splitGroups.length === 1 ? ' is' : 's are'} too wide for one board, so {b.layout.splitGroups.length === 1 ? 'its' : 'their'} boards come from several (red outlines). Pick boards of like colour and figure.</p>
+                    {b.layout.splitWarnings.length > 0 && (
+                      <div className="text-xs text-pencil" data-split-warnings>
+                        <p>Grain match split (red outlines): {b.layout.splitWarnings.length === 1 ? 'this group comes' : 'these groups come'} from several boards.</p>
+                        <ul className="list-disc pl-5">{b.layout.splitWarnings.map((w) => <li key={w.group}>{w.message}</li>)}</ul>
+                      </div>
                     )}
                     {b.layout.boards.map((plan, i) => (
                       <BoardDiagramView key={i} plan={plan} kerfMm={b.layout.kerfMm} longestMm={longestBoard} splitGroups={b.layout.splitGroups} title={`Board ${i + 1} of ${b.layout.boards.length} — ${plan.stockName}`} />
