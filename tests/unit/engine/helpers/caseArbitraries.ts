@@ -42,7 +42,6 @@ export const sensibleDresserSpec: fc.Arbitrary<PieceSpec> = fc.record({
   params: {
     ...params,
     faceFrame: params.faceFrame || params.frontMount === 'inset' || params.slideType === 'wood-runners',
-    slideType: params.caseConstruction === 'frame-and-panel' ? 'wood-runners' : params.slideType,
   },
   climate: c,
 }));

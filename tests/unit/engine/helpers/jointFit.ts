@@ -7,7 +7,11 @@ import { boxContains } from '../../../../shared/engine/geometry/box.ts';
 import type { Box3, JointType, PieceResult } from '../../../../shared/engine/types.ts';
 import { featureBoxToWorld } from './solids.ts';
 
-const TOLERANCE_MM = 1e-6;
+/**
+ * The assembly merges parts whose sizes agree to its 0.1 µm grid, and places every instance with
+ * the first one's features, so a tongue or housing may stand up to 0.1 µm off: 1e-4 mm.
+ */
+const TOLERANCE_MM = 1e-4;
 
 /** Problems found, in words; empty when every tongue fits. */
 export function jointFitProblems(result: PieceResult, types: readonly JointType[]): string[] {
@@ -32,7 +36,7 @@ export function jointFitProblems(result: PieceResult, types: readonly JointType[
         const gaps = [0, 1, 2].map((axis) => ({ lo: tongue.min[axis]! - host.min[axis]!, hi: host.max[axis]! - tongue.max[axis]! }));
         if (!gaps.some(({ lo, hi }) => Math.abs(lo) < TOLERANCE_MM && Math.abs(hi) < TOLERANCE_MM)) problems.push(`${joint.id} ${pl.label}: tongue not as thick as its housing is wide`);
         const ends = gaps.flatMap(({ lo, hi }) => (Math.abs(lo) < TOLERANCE_MM ? [hi] : Math.abs(hi) < TOLERANCE_MM ? [lo] : []));
-        if (!ends.some((g) => Math.abs(g - joint.clearanceMm) < 1e-6)) problems.push(`${joint.id} ${pl.label}: no end gap equals the stated clearance ${joint.clearanceMm}`);
+        if (!ends.some((g) => Math.abs(g - joint.clearanceMm) < TOLERANCE_MM)) problems.push(`${joint.id} ${pl.label}: no end gap equals the stated clearance ${joint.clearanceMm}`);
       }
     }
     if (fitted === 0) problems.push(`${joint.id}: no tongue lies in its housing`);

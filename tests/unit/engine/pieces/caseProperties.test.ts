@@ -82,6 +82,18 @@ for (const [kind, sensible, brokenSpec] of [['dresser', sensibleDresserSpec, bro
     }, PROPERTY_TIMEOUT_MS);
   });
 
+  if (kind === 'dresser') {
+    describe('buildPiece (dresser) over random sensible specs, by construction and slide', () => {
+      it('builds frame-and-panel dressers on every kind of slide among its samples', () => {
+        const built = fc.sample(sensible, { numRuns: 200, seed: 7 }).map(tryBuild).filter((r): r is PieceResult => r !== null);
+        const framed = (slide: string) => built.filter((r) => r.spec.params.caseConstruction === 'frame-and-panel' && r.spec.params.slideType === slide);
+        for (const slide of ['side-mount', 'undermount', 'wood-runners']) expect(framed(slide).length).toBeGreaterThan(0);
+        // On metal slides every framed dresser hangs its drawers on spacers.
+        for (const r of [...framed('side-mount'), ...framed('undermount')]) expect(r.parts.some((x) => x.id.includes('slide-spacer'))).toBe(true);
+      }, PROPERTY_TIMEOUT_MS);
+    });
+  }
+
   describe(`buildPiece (${kind}) over random broken specs`, () => {
     it('throws an InputError naming a field, never another kind of error and never NaN', () => {
       fc.assert(fc.property(brokenSpec, (spec) => {

@@ -383,13 +383,86 @@ describe('buildPiece (dresser) built like the chest', () => {
     within(c?.numbers.midRailShowsMm, 3.175);
   });
 
-  it('refuses slides other than wooden runners, naming slideType', () => {
+});
+
+describe('buildPiece (dresser) built like the chest, on side-mount slides', () => {
+  // The default dresser with only the case switched: 56 × 20 × 34 in, 1-3/4 in legs, 3/4 in side
+  // rails centred on them, a 2 in mullion, 1/2 in overlay fronts, 1/2 in drawer stock, 1/4 in
+  // clearance below the box, 1/2 in above, 1 in behind; side-mount slides (the form's default).
+  const r = dresser({ caseConstruction: 'frame-and-panel' });
+
+  it('fills the step from the side frames to the legs with spacers: worked by hand', () => {
+    // The side rails are centred on the legs, so their inner face stands (44.45 − 19.05) / 2
+    // = 12.7 mm back from the legs' inner faces: the spacer is 12.7 mm (1/2 in) thick, its face
+    // flush with the opening. Six, one each side of three rows; 2 in tall (Casewright's
+    // choice to cover a slide's cabinet member; common practice, no published source).
+    const spacer = part(r, 'slide-spacer');
+    within(spacer.thicknessMm, 12.7);
+    within(spacer.widthMm, 50.8);
+    expect(spacer.quantity).toBe(6);
+    // Behind the mullion a block as wide as it: 50.8 mm, one a row.
+    within(part(r, 'centre-slide-spacer').thicknessMm, 50.8);
+    expect(part(r, 'centre-slide-spacer').quantity).toBe(3);
+  });
+
+  it('sizes the drawer boxes from the opening for the slides\' clearance: worked by hand', () => {
+    // Openings (1422.4 − 2 × 44.45 − 50.8) / 2 = 641.35 mm wide; side-mount slides take 1/2 in
+    // each side (common practice, from memory, approximate, as the carcass dresser): the box is
+    // 641.35 − 2 × 12.7 = 615.95 mm wide, so its front runs between the two 12.7 mm sides with a
+    // tongue 6.35 mm (half the side) into each: 615.95 − 2 × 12.7 + 2 × 6.35 = 603.25.
+    const sides = r.parts.filter((x) => x.id.endsWith('drawer-side'));
+    expect(sides).toHaveLength(3);
+    within(part(r, 'row-1-drawer-box-front').lengthMm, 603.25);
+    // Depth: the back wall's inner face is 508 − 12.7 − 19.05 = 476.25 mm from the front, less 1 in
+    // behind the box leaves 450.85; the longest slide in 2 in steps that fits is 16 in = 406.4 mm,
+    // and the box is as long as the slide.
+    sides.forEach((s) => within(s.lengthMm, 406.4));
+    // Row 1: the 204.258 mm opening less 1/4 in below and 1/2 in above = 185.208 mm.
+    within(part(r, 'row-1-drawer-side').widthMm, 185.208);
+    // The side spacer runs from the back of the 44.45 mm front leg to the slide's end:
+    // 406.4 − 44.45 = 361.95; the centre block from behind the 19.05 mm mullion: 387.35.
+    within(part(r, 'slide-spacer').lengthMm, 361.95);
+    within(part(r, 'centre-slide-spacer').lengthMm, 387.35);
+  });
+
+  it('glues and screws every spacer to its runner, and hangs each drawer side on a spacer', () => {
+    const onRunners = r.joints.filter((j) => j.members[0].partId.includes('slide-spacer'));
+    expect(onRunners.map((j) => j.type)).toEqual(onRunners.map(() => 'butt-screwed'));
+    expect(onRunners.every((j) => j.glued && j.members[1].partId.startsWith('web-frame'))).toBe(true);
+    const slides = r.joints.filter((j) => j.type === 'drawer-slide');
+    expect(slides.length).toBeGreaterThan(0);
+    expect(slides.every((j) => j.members[1].partId.includes('slide-spacer'))).toBe(true);
+    within(slides[0]!.clearanceMm, 12.7);
+  });
+
+  it('builds its defaults clean: no error or warning, no caution but the tip-over one', () => {
+    expect(r.checks.filter((c) => c.severity === 'error' || c.severity === 'warning')).toEqual([]);
+    expect(r.checks.filter((c) => c.severity === 'caution').map((c) => c.id)).toEqual(['tip-over']);
+  });
+
+  it('takes undermount slides on the same spacers, warning when the bottoms sit too low', () => {
+    const u = dresser({ caseConstruction: 'frame-and-panel', slideType: 'undermount' });
+    expect(u.checks.filter((c) => c.severity === 'error')).toEqual([]);
+    expect(part(u, 'slide-spacer').quantity).toBe(6);
+    // Undermount slides take about 3/16 in each side (common practice, from memory, approximate):
+    // the box is 641.35 − 2 × 4.7625 = 631.825 wide, its front 631.825 − 12.7 = 619.125 long.
+    within(part(u, 'row-1-drawer-box-front').lengthMm, 619.125);
+    const low = dresser({ caseConstruction: 'frame-and-panel', slideType: 'undermount', drawerBottomSetUp: 6 });
+    expect(low.checks.find((c) => c.id === 'undermount-set-up')?.severity).toBe('warning');
+  });
+
+  it('has no spacers on wooden runners', () => {
+    const w = dresser({ caseConstruction: 'frame-and-panel', slideType: 'wood-runners' });
+    expect(w.parts.some((x) => x.id.includes('slide-spacer'))).toBe(false);
+  });
+
+  it('refuses a drawer depth too short to reach past the legs, naming drawerDepth', () => {
     try {
-      dresser({ caseConstruction: 'frame-and-panel', slideType: 'side-mount' });
+      dresser({ caseConstruction: 'frame-and-panel', drawerDepth: 60 });
       expect.unreachable();
     } catch (error) {
       expect(isInputError(error)).toBe(true);
-      expect((error as { field: string }).field).toBe('slideType');
+      expect((error as { field: string }).field).toBe('drawerDepth');
     }
   });
 });
