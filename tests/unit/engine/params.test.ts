@@ -1,6 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { defaultSpec, paramDefs, validateSpec } from '../../../shared/engine/index.ts';
 import { InputError, isInputError } from '../../../shared/errors.ts';
+import { checkSpecForBuild } from '../../../shared/engine/params.ts';
+import { chestLayout, type ChestParams } from '../../../shared/engine/pieces/chestLayout.ts';
 
 function errorOf(spec: unknown): InputError {
   try {
@@ -94,5 +96,19 @@ describe('validateSpec', () => {
     expect(errorOf({ schemaVersion: 1, kind: 'wardrobe', params: {} }).field).toBe('kind');
     expect(errorOf(null).field).toBe('spec');
     expect(errorOf({ schemaVersion: 1, kind: 'chest', params: {}, climate: { buildMcPercent: 8, lowMcPercent: 12, highMcPercent: 10 } }).field).toBe('climate.lowMcPercent');
+  });
+});
+
+describe('checkSpecForBuild', () => {
+  it('returns the spec validateSpec returns and, for a chest, the layout its checks read', () => {
+    const spec = chestWith({ width: 1100, frontStileCount: 2 });
+    const checked = checkSpecForBuild(spec);
+    expect(checked.spec).toEqual(validateSpec(spec));
+    expect(checked.chestLayout).toEqual(chestLayout(checked.spec.params as unknown as ChestParams, checked.spec.climate!));
+    expect(checked.chestLayout!.spanXMm).toBe(1100 - 2 * (checked.spec.params.legSize as number));
+  });
+
+  it('returns no chest layout for a dresser', () => {
+    expect(checkSpecForBuild(defaultSpec('dresser')).chestLayout).toBeUndefined();
   });
 });

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { axisDeterminant, localBoxToWorld, localFaceOf, worldBoxToLocal } from '../../../../shared/engine/geometry/placement.ts';
+import { axisDeterminant, localBoxToWorld, localFaceOf, worldBoxToLocal, worldBoxToLocalInto } from '../../../../shared/engine/geometry/placement.ts';
 import { buildPiece, defaultSpec } from '../../../../shared/engine/index.ts';
 import type { Box3 } from '../../../../shared/engine/types.ts';
 
@@ -23,6 +23,20 @@ describe('localBoxToWorld', () => {
     expect(localFaceOf(axes, '-X')).toBe('face-b');
     expect(localFaceOf(axes, '+X')).toBe('face-a');
     expect(localFaceOf(axes, '-Z')).toBe('end-a');
+  });
+});
+
+describe('worldBoxToLocalInto', () => {
+  it('writes the same local box as worldBoxToLocal, min then max, from the given index', () => {
+    const axes = { length: '-Y', width: '+Z', thickness: '-X' } as const;
+    const size = [500, 80, 20] as const;
+    const world: Box3 = { min: [114, 670, 305], max: [120, 690, 315] };
+    const out = [-1, -1, -1, -1, -1, -1, -1, -1];
+    worldBoxToLocalInto(world, size, axes, [100, 200, 300], out, 2);
+    const box = worldBoxToLocal(world, size, axes, [100, 200, 300]);
+    expect(out.slice(0, 2)).toEqual([-1, -1]);
+    expect(out.slice(2)).toEqual([...box.min, ...box.max]);
+    expect(out.slice(2)).toEqual([10, 5, 0, 30, 15, 6]);
   });
 });
 
