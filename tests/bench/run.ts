@@ -6,7 +6,7 @@ import { existsSync } from 'node:fs';
 import { dirname, join } from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 
-type BenchRow = { name: string; medianMs: number; p95Ms: number; runs: number };
+type BenchRow = { name: string; medianMs: number; p95Ms: number; cpuMedianMs?: number; runs: number };
 type Bench = { file: string; exportName: string; title: string };
 
 const here = dirname(fileURLToPath(import.meta.url));
@@ -22,9 +22,13 @@ const benches: Bench[] = [
 
 function printRows(rows: BenchRow[]) {
   const width = Math.max(...rows.map((r) => r.name.length), 10);
-  console.log(`  ${'case'.padEnd(width)}  ${'median ms'.padStart(10)}  ${'p95 ms'.padStart(10)}  ${'runs'.padStart(7)}`);
+  // The processor-time column only for benches that measure it (the engine's).
+  const cpu = rows.some((r) => r.cpuMedianMs !== undefined);
+  const cpuHead = cpu ? `  ${'cpu median ms'.padStart(13)}` : '';
+  console.log(`  ${'case'.padEnd(width)}  ${'median ms'.padStart(10)}  ${'p95 ms'.padStart(10)}${cpuHead}  ${'runs'.padStart(7)}`);
   for (const r of rows) {
-    console.log(`  ${r.name.padEnd(width)}  ${r.medianMs.toFixed(4).padStart(10)}  ${r.p95Ms.toFixed(4).padStart(10)}  ${String(r.runs).padStart(7)}`);
+    const cpuCell = cpu ? `  ${(r.cpuMedianMs?.toFixed(4) ?? '-').padStart(13)}` : '';
+    console.log(`  ${r.name.padEnd(width)}  ${r.medianMs.toFixed(4).padStart(10)}  ${r.p95Ms.toFixed(4).padStart(10)}${cpuCell}  ${String(r.runs).padStart(7)}`);
   }
 }
 
