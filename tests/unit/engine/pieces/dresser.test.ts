@@ -403,6 +403,9 @@ describe('buildPiece (dresser) built like the chest, on side-mount slides', () =
     // Behind the mullion a block as wide as it: 50.8 mm, one a row.
     within(part(r, 'centre-slide-spacer').thicknessMm, 50.8);
     expect(part(r, 'centre-slide-spacer').quantity).toBe(3);
+    const rows = r.derived.cutList.flatMap((g) => g.rows);
+    expect(rows.find((x) => x.partId === 'slide-spacer')?.quantity).toBe(6);
+    expect(rows.find((x) => x.partId === 'centre-slide-spacer')?.quantity).toBe(3);
   });
 
   it('sizes the drawer boxes from the opening for the slides\' clearance: worked by hand', () => {
