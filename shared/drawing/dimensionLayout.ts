@@ -52,7 +52,7 @@ function seg(a: Pt, b: Pt): Primitive {
  * are the measured points on paper with p0 ≤ p1 along the axis. `textPlace` picks where the
  * text goes; returns the primitives and the interval they take along the row.
  */
-function drawDimension(req: DimensionRequest, p0: Pt, p1: Pt, side: Side, rowAt: number, textPlace: 'inside' | 'after' | 'before'): PlacedDim {
+function drawDimension(req: DimensionRequest, p0: Pt, p1: Pt, side: Side, rowAt: number, textPlace: 'inside' | 'after' | 'before', insideCentre?: number): PlacedDim {
   const horizontal = req.axis === 'h';
   const lo = horizontal ? p0[0] : p0[1];
   const hi = horizontal ? p1[0] : p1[1];
@@ -81,7 +81,8 @@ function drawDimension(req: DimensionRequest, p0: Pt, p1: Pt, side: Side, rowAt:
   }
 
   let textLo: number;
-  if (textPlace === 'inside') textLo = (lo + hi) / 2 - textW / 2;
+  const centreInside = insideCentre ?? (lo + hi) / 2;
+  if (textPlace === 'inside') textLo = centreInside - textW / 2;
   else if (textPlace === 'after') textLo = hi + (arrowsInside ? 1.2 : ARROW_MM + 2.8);
   else textLo = lo - (arrowsInside ? 1.2 : ARROW_MM + 2.8) - textW;
 
@@ -90,13 +91,13 @@ function drawDimension(req: DimensionRequest, p0: Pt, p1: Pt, side: Side, rowAt:
   const label: Label = horizontal
     ? { type: 'label', at: pt(textLo + textW / 2, rowAt - TEXT_GAP_MM), text: req.text, sizePt: DIM_TEXT_PT, anchor: 'middle', font: 'mono' }
     : // Vertical: text turned to read from the bottom, centred along the row; y runs down, so "after" is toward smaller y.
-      { type: 'label', at: pt(rowAt - TEXT_GAP_MM, verticalTextCentre(lo, hi, textW, textPlace, arrowsInside)), text: req.text, sizePt: DIM_TEXT_PT, anchor: 'middle', font: 'mono', rotate: 90 };
+      { type: 'label', at: pt(rowAt - TEXT_GAP_MM, textPlace === 'inside' ? centreInside : verticalTextCentre(lo, hi, textW, textPlace, arrowsInside)), text: req.text, sizePt: DIM_TEXT_PT, anchor: 'middle', font: 'mono', rotate: 90 };
   out.push(label);
 
   const lineLo = arrowsInside ? lo : lo - ARROW_MM - 2;
   const lineHi = arrowsInside ? hi : hi + ARROW_MM + 2;
   if (horizontal) return { primitives: out, lo: Math.min(lineLo, textLo), hi: Math.max(lineHi, textLo + textW) };
-  const centre = verticalTextCentre(lo, hi, textW, textPlace, arrowsInside);
+  const centre = textPlace === 'inside' ? centreInside : verticalTextCentre(lo, hi, textW, textPlace, arrowsInside);
   return { primitives: out, lo: Math.min(lineLo, centre - textW / 2), hi: Math.max(lineHi, centre + textW / 2) };
 }
 
@@ -106,6 +107,41 @@ function verticalTextCentre(lo: number, hi: number, textW: number, place: 'insid
   // On paper y grows downward: "after" puts the text above the upper end (smaller y).
   if (place === 'after') return lo - pad - textW / 2;
   return hi + pad + textW / 2;
+}
+
+/** Stations closer than this to a dimension's own ends are its own extension lines, mm. */
+const STATION_SAME_MM = 0.05;
+/** Clear space kept between a dimension text and another dimension's extension line, mm. */
+const STATION_CLEAR_MM = 0.8;
+
+/**
+ * Where along [`lo`, `hi`] to centre a text `textW` wide so no station (another dimension's
+ * extension line) runs through it: the middle if it is clear, else the nearest clear centre
+ * that keeps the text between the arrowheads; the middle when none is.
+ */
+function clearCentre(lo: number, hi: number, textW: number, stations: readonly number[]): number {
+  const mid = (lo + hi) / 2;
+  const clear = (c: number): boolean => stations.every((x) => x < c - textW / 2 - STATION_CLEAR_MM || x > c + textW / 2 + STATION_CLEAR_MM);
+  if (clear(mid)) return mid;
+  const min = lo + ARROW_MM + 0.5 + textW / 2;
+  const max = hi - ARROW_MM - 0.5 - textW / 2;
+  for (let step = 0.5; mid - step >= min || mid + step <= max; step += 0.5) {
+    if (mid + step <= max && clear(mid + step)) return mid + step;
+    if (mid - step >= min && clear(mid - step)) return mid - step;
+  }
+  return mid;
+}
+
+/** Rows tried for a text clear of other dimensions' extension lines before one across them is accepted. */
+const STATION_ROWS_TRIED = 3;
+
+/** True when the candidate's text runs across none of `stations` (paper mm along its row). */
+function textClearOf(c: PlacedDim, stations: readonly number[]): boolean {
+  const label = c.primitives.find((p) => p.type === 'label');
+  if (!label) return true;
+  const r = primitiveRect(label);
+  const [a, b] = label.type === 'label' && label.rotate === 90 ? [r.y, r.y + r.h] : [r.x, r.x + r.w];
+  return stations.every((x) => x <= a - STATION_CLEAR_MM || x >= b + STATION_CLEAR_MM);
 }
 
 interface Row {
@@ -137,6 +173,12 @@ export function layoutView(model: ModelView, scale: number, scaleLabel: string):
     const r = inflate(primitiveRect(label), 0.7);
     return textRects.every((t) => !rectsOverlap(r, t));
   };
+  // Where every dimension on a side has its extension lines: a text set across one of them, the
+  // line of a dimension further out would strike through it, so inside texts slide clear.
+  const stationsOn: Record<Side, number[]> = { below: [], above: [], left: [], right: [] };
+  for (const d of model.dimensions) {
+    for (const q of [toPaper(d.a), toPaper(d.b)]) stationsOn[d.side].push(d.axis === 'h' ? q[0] : q[1]);
+  }
   const byTier = [...model.dimensions].filter((d) => Math.abs(d.valueMm) >= MIN_DIM_MM).sort((x, y) => x.tier - y.tier || x.valueMm - y.valueMm);
 
   let currentTier = byTier[0]?.tier ?? 0;
@@ -153,13 +195,20 @@ export function layoutView(model: ModelView, scale: number, scaleLabel: string):
     const span = horizontal ? p1[0] - p0[0] : p1[1] - p0[1];
     const textW = textWidthMm(req.text, DIM_TEXT_PT);
     const places: ('inside' | 'after' | 'before')[] = span >= textW + 2 * ARROW_MM + 1.5 ? ['inside'] : ['after', 'before'];
+    const lo = horizontal ? p0[0] : p0[1];
+    const hi = horizontal ? p1[0] : p1[1];
+    const foreign = stationsOn[side].filter((x) => Math.abs(x - lo) > STATION_SAME_MM && Math.abs(x - hi) > STATION_SAME_MM);
+    const insideCentre = clearCentre(lo, hi, textW, foreign);
 
     let placed: PlacedDim | null = null;
     for (let r = tierStart[side]; placed === null; r++) {
       const rowAt = rowPosition(geometry, side, r);
       for (const place of places) {
-        const candidate = drawDimension(req, p0, p1, side, rowAt, place);
-        if (fits(rows[side][r], candidate.lo, candidate.hi) && textFree(candidate)) {
+        const candidate = drawDimension(req, p0, p1, side, rowAt, place, place === 'inside' ? insideCentre : undefined);
+        // A text set beside its line must not sit across another's extension line either; after a
+        // few rows that cannot be helped, the first free place is taken.
+        const across = place === 'inside' || r - tierStart[side] >= STATION_ROWS_TRIED || textClearOf(candidate, foreign);
+        if (fits(rows[side][r], candidate.lo, candidate.hi) && textFree(candidate) && across) {
           placed = candidate;
           const label = candidate.primitives.find((p) => p.type === 'label');
           if (label) textRects.push(primitiveRect(label));

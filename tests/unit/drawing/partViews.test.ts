@@ -3,6 +3,7 @@ import { layoutView, primitiveRect } from '../../../shared/drawing/dimensionLayo
 import { lengthText } from '../../../shared/drawing/lengthText.ts';
 import { partViews } from '../../../shared/drawing/partViews.ts';
 import { rectsOverlap } from '../../../shared/drawing/rects.ts';
+import type { ModelView } from '../../../shared/drawing/types.ts';
 import type { Part } from '../../../shared/engine/types.ts';
 import { buildPiece, defaultSpec } from '../../../shared/engine/index.ts';
 import { sampleResult } from './support/sampleResult.ts';
@@ -64,6 +65,25 @@ describe('layoutView', () => {
         }
       }
     }
+  });
+
+  it('slides a dimension text along its line off another dimension\'s extension line', () => {
+    // 0–200 overall above a 0–100 cut: the cut's extension line at 100 runs up through the middle
+    // of the overall dimension, where its text would sit.
+    const view: ModelView = {
+      id: 'test', title: 'Test', callouts: [], bounds: { x: 0, y: 0, w: 200, h: 50 },
+      primitives: [{ type: 'polygon', points: [[0, 0], [200, 0], [200, 50], [0, 50]], fill: null, kind: 'visible' }],
+      dimensions: [
+        { a: [0, 50], b: [100, 50], axis: 'h', side: 'above', text: '100', valueMm: 100, tier: 0 },
+        { a: [0, 50], b: [200, 50], axis: 'h', side: 'above', text: '200', valueMm: 200, tier: 1 },
+      ],
+    };
+    const placed = layoutView(view, 1, '1:1');
+    const text = placed.primitives.find((p) => p.type === 'label' && p.text === '200');
+    if (!text) throw new Error('no text');
+    const r = primitiveRect(text);
+    const station = 100; // paper x of the cut's extension line at 1:1
+    expect(r.x > station || r.x + r.w < station, `text from ${r.x} to ${r.x + r.w}`).toBe(true);
   });
 
   it('puts overall sizes outside the sizes of cuts on the same side', () => {
