@@ -443,6 +443,15 @@ describe('buildPiece (dresser) built like the chest, on side-mount slides', () =
     expect(r.checks.filter((c) => c.severity === 'caution').map((c) => c.id)).toEqual(['tip-over']);
   });
 
+  it('passes its drawer checks as the carcass dresser does, both on the default side-mount slides', () => {
+    const carcass = dresser();
+    expect(carcass.spec.params.slideType).toBe('side-mount');
+    for (const d of [carcass, r]) {
+      expect(d.checks.filter((c) => c.id.startsWith('drawer-') && c.severity !== 'info')).toEqual([]);
+      expect(d.checks.find((c) => c.id === 'drawer-travel')?.message).toMatch(/side-mount slides/);
+    }
+  });
+
   it('takes undermount slides on the same spacers, warning when the bottoms sit too low', () => {
     const u = dresser({ caseConstruction: 'frame-and-panel', slideType: 'undermount' });
     expect(u.checks.filter((c) => c.severity === 'error')).toEqual([]);
