@@ -94,7 +94,7 @@ function coverSheet(result: PieceResult, spec: SheetSpec, units: DrawingUnits, c
   ];
   if (torque) rows.push(['Lid torque, closed', `${torque.torqueNm.toFixed(1)} N·m`]);
   const flow: FlowBlock[] = [
-    { type: 'table', title: 'Key numbers', head: ['', ''], rows, numericColumns: [1] },
+    { type: 'table', title: 'Key numbers', head: ['Item', 'Value'], rows, numericColumns: [1] },
     { type: 'text', title: 'Contents', paragraphs: contents, bullets: true },
   ];
   return { ...emptySheet(spec, 'Cover', flow, flowArea), views };
