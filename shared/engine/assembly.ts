@@ -323,7 +323,10 @@ export function assemble(drafts: readonly PartDraft[], joints: readonly JointDra
     if (first.glueUp) part.glueUp = first.glueUp;
     const runs = grainMatchOf(same);
     if (runs) part.grainMatch = runs;
-    parts.push(Object.assign(part, { rough: roughFor(part), quantity: same.length }));
+    const whole = part as PartBody & { rough?: Part['rough']; quantity?: number };
+    whole.rough = roughFor(part);
+    whole.quantity = same.length;
+    parts.push(whole as Part);
     same.forEach((draft, instance) => {
       partIdOf.set(draft, id);
       placements.push(placeInto(id, instance, draft.label, draft.size, chosen.get(draft)!.axes, draft.world, draft.explodeMm));

@@ -7,6 +7,10 @@ const ROLE_ORDER: readonly PartRole[] = [
   'case-side', 'case-top', 'case-bottom', 'stretcher', 'divider', 'shelf', 'back', 'base',
 ];
 
+// Rank of each role in the cut list, looked up rather than searched for in every comparison.
+const ROLE_RANK = new Map(ROLE_ORDER.map((role, i) => [role, i]));
+const roleRank = (role: PartRole): number => ROLE_RANK.get(role) ?? -1;
+
 /** The material a part is bought as, e.g. `White oak 4/4` or a sheet good's name. */
 export function materialLabel(part: Part): string {
   return part.material.kind === 'solid' ? `${part.material.speciesName} ${part.rough.quarters}/4` : part.material.sheetName;
@@ -25,7 +29,7 @@ export function grainMatchNotes(part: Part): string[] {
 /** Groups parts by material (solid wood by species and stock thickness first, then sheets). */
 export function cutList(parts: readonly Part[]): CutListGroup[] {
   const groups = new Map<string, { kind: 'solid' | 'sheet'; quarters: number; rows: CutListRow[] }>();
-  const sorted = [...parts].sort((a, b) => ROLE_ORDER.indexOf(a.role) - ROLE_ORDER.indexOf(b.role));
+  const sorted = [...parts].sort((a, b) => roleRank(a.role) - roleRank(b.role));
   for (const part of sorted) {
     const label = materialLabel(part);
     const group = groups.get(label) ?? { kind: part.material.kind, quarters: part.rough.quarters, rows: [] };
