@@ -2,12 +2,13 @@
  * One cutting diagram on paper: a sheet or board from shared/layout's diagrams, drawn to a
  * stated scale, each part outlined and labelled with its cut-list name and size (or, when the
  * part is too small on paper for words, its number on this diagram, named in a key), the saw
- * cuts with their order, the trimmed edge dashed and defects marked in pencil red.
+ * cuts with their order, the trimmed edge dashed, defects marked in pencil red and grain-matched
+ * runs bracketed under the board with their note (in pencil red when the run is split over boards).
  */
-import type { BoardDiagram, DiagramBox, DiagramCut, DiagramPart, SheetDiagram } from '../layout/diagram.ts';
+import type { BoardDiagram, DiagramBox, DiagramCut, DiagramMatchRun, DiagramPart, SheetDiagram } from '../layout/diagram.ts';
 import { lengthText, type DrawingUnits } from './lengthText.ts';
 import { scaleText } from './scale.ts';
-import { MM_PER_PT, MONO_ADVANCE, VIEW_TITLE_PT } from './textMetrics.ts';
+import { MM_PER_PT, MONO_ADVANCE, VIEW_TITLE_PT, textWidthMm } from './textMetrics.ts';
 import type { Label, LineKind, PlacedView, Primitive, Pt, Rect } from './types.ts';
 
 /** Largest and smallest text inside a part, pt; below the smallest a part shows its number. */
@@ -17,6 +18,12 @@ const LABEL_MIN_PT = 4;
 const TAG_MIN_PT = 3;
 /** Height of the line over a diagram that names it, mm. */
 export const DIAGRAM_TITLE_MM = 5;
+/** Size of a grain-match run's note under its bracket, pt. */
+const RUN_NOTE_PT = 5;
+/** From the board's edge to its brackets, the brackets' ticks, and one row of bracket notes, mm. */
+const RUN_GAP_MM = 1;
+const RUN_TICK_MM = 1;
+const RUN_ROW_MM = 2.4;
 
 /** A diagram to draw: a sheet's or a board's, with the words over it. */
 export interface DiagramInput {
@@ -29,6 +36,8 @@ export interface DiagramInput {
   /** The sheet inside its trimmed edges; absent on boards. */
   usable?: DiagramBox;
   defects?: readonly (DiagramBox & { note: string })[];
+  /** Grain-matched runs on a board, bracketed under it. */
+  matchRuns?: readonly DiagramMatchRun[];
 }
 
 /** A sheet diagram as {@link DiagramInput}. */
@@ -38,7 +47,7 @@ export function sheetInput(id: string, title: string, d: SheetDiagram): DiagramI
 
 /** A board diagram as {@link DiagramInput}. */
 export function boardInput(id: string, title: string, d: BoardDiagram): DiagramInput {
-  return { id, title, lengthMm: d.lengthMm, widthMm: d.widthMm, parts: d.parts, cuts: d.crosscuts, defects: d.defects };
+  return { id, title, lengthMm: d.lengthMm, widthMm: d.widthMm, parts: d.parts, cuts: d.crosscuts, defects: d.defects, matchRuns: d.matchRuns };
 }
 
 /** The part's size as a cut list writes it: length × width. */
@@ -86,6 +95,30 @@ function partLabels(part: DiagramPart, box: Rect, units: DrawingUnits): { labels
   return { labels: [{ type: 'label', at: [cx, cy + 0.35 * tagPt * MM_PER_PT], text: tag, sizePt: tagPt, anchor: 'middle', font: 'mono', bold: true }], tagOnly: true };
 }
 
+/**
+ * Where each run's note is set under a board drawn at 1:`scale` from `ox`: from its bracket's
+ * start, or ending at the board's end when it would run past it; and on the first row where it
+ * clears the notes already there, so runs side by side never write over one another.
+ */
+function runNotePlaces(runs: readonly DiagramMatchRun[], boardMm: number, scale: number, ox: number): { x: number; row: number }[] {
+  const rowEnds: number[] = [];
+  return runs.map((run) => {
+    const width = textWidthMm(run.text, RUN_NOTE_PT);
+    const x = Math.max(ox, Math.min(ox + run.fromMm / scale, ox + boardMm / scale - width));
+    let row = rowEnds.findIndex((e) => e <= x);
+    if (row < 0) row = rowEnds.length;
+    rowEnds[row] = x + width + 1;
+    return { x, row };
+  });
+}
+
+/** Height under a board of `boardMm` its grain-match brackets and notes take at 1:`scale`, mm (0 without runs). */
+export function matchRunBandMm(runs: readonly DiagramMatchRun[], boardMm: number, scale: number): number {
+  if (!runs.length) return 0;
+  const rows = Math.max(...runNotePlaces(runs, boardMm, scale, 0).map((p) => p.row)) + 1;
+  return RUN_GAP_MM + RUN_TICK_MM + rows * RUN_ROW_MM + 0.6;
+}
+
 /** What {@link drawDiagram} returns: the view, and the parts that show only their number. */
 export interface DrawnDiagram {
   view: PlacedView;
@@ -126,6 +159,21 @@ export function drawDiagram(d: DiagramInput, scale: number, at: Pt, units: Drawi
     const alongX = a[1] === b[1];
     primitives.push({ type: 'label', at: alongX ? [a[0] + 0.8, a[1] - 0.5] : [a[0] + 0.5, a[1] + 2.2], text: String(cut.order), sizePt: 4.5, anchor: 'start', font: 'mono', accent: true });
   }
-  const frame: Rect = { x: at[0], y: at[1], w: Math.max(geometry.w, 10), h: DIAGRAM_TITLE_MM + geometry.h };
+  const runs = d.matchRuns ?? [];
+  const places = runNotePlaces(runs, d.lengthMm, scale, ox);
+  runs.forEach((run, i) => {
+    // A bracket under the board from the run's first part to its last, its note under the bracket.
+    const [x1, x2] = [ox + run.fromMm / scale, ox + run.toMm / scale];
+    const y = geometry.y + geometry.h + RUN_GAP_MM + RUN_TICK_MM;
+    const accent = run.partial;
+    const kind: LineKind = accent ? 'accent' : 'visible';
+    primitives.push(
+      { type: 'segment', a: [x1, y - RUN_TICK_MM], b: [x1, y], kind },
+      { type: 'segment', a: [x1, y], b: [x2, y], kind },
+      { type: 'segment', a: [x2, y], b: [x2, y - RUN_TICK_MM], kind },
+      { type: 'label', at: [places[i]!.x, y + RUN_ROW_MM * (places[i]!.row + 1) - 0.4], text: run.text, sizePt: RUN_NOTE_PT, anchor: 'start', font: 'sans', ...(accent ? { accent } : {}) },
+    );
+  });
+  const frame: Rect = { x: at[0], y: at[1], w: Math.max(geometry.w, 10), h: DIAGRAM_TITLE_MM + geometry.h + matchRunBandMm(runs, d.lengthMm, scale) };
   return { view: { id: d.id, title: d.title, scale, scaleText: scaleText(scale), primitives, frame, geometry, dimensionTexts: [] }, tagOnly };
 }

@@ -2,7 +2,9 @@
  * The plan set's materials pages, read from shared/materials' takeoff (boards and sheets laid
  * out by shared/layout): what the layouts use against what the parts need, cost and shopping
  * list where a price list is given, then the cutting diagrams of every sheet and board, drawn
- * to scale with each part named and sized.
+ * to scale with each part named and sized, defects marked and grain-matched runs bracketed.
+ * Laid out on the workshop's stock when one is given (as the Materials page does), else on the
+ * default stock; the page says which.
  */
 import type { PieceResult } from '../engine/types.ts';
 import { boardDiagram, sheetDiagram } from '../layout/diagram.ts';
@@ -10,17 +12,27 @@ import { costOf, type ExtraItem } from '../materials/cost.ts';
 import { centsText } from '../materials/money.ts';
 import type { PriceList } from '../materials/priceList.ts';
 import { shoppingList } from '../materials/shoppingList.ts';
+import { DEFAULT_STOCK_SETTINGS, takeoffOptionsFor, type StockSettings } from '../materials/stockSettings.ts';
 import { materialsTakeoff, type MaterialsTakeoff } from '../materials/takeoff.ts';
-import { boardInput, diagramPartSize, drawDiagram, sheetInput, type DiagramInput } from './cuttingDiagram.ts';
+import { boardInput, diagramPartSize, drawDiagram, matchRunBandMm, sheetInput, type DiagramInput } from './cuttingDiagram.ts';
 import { lengthText, type DrawingUnits } from './lengthText.ts';
 import { drawingArea, sheetSizeMm } from './paper.ts';
 import { usualScales } from './scale.ts';
 import { materialsBlocks } from './schedules.ts';
-import type { FlowBlock, PlacedView, Rect, Sheet, SheetSpec, TableBlock } from './types.ts';
+import type { FlowBlock, PlacedView, Rect, Sheet, SheetSpec, TableBlock, TextBlock } from './types.ts';
 
-/** What the materials pages are built from; without a takeoff the default stock is laid out. */
+/** What the materials pages are built from; without a takeoff or a stock the default stock is laid out. */
 export interface PlanSetMaterials {
+  /** A takeoff already run; `stock` then only describes it. */
   takeoff?: MaterialsTakeoff;
+  /**
+   * The workshop's stock, laid out with `takeoffOptionsFor(stock)` at the usual effort as the
+   * Materials page does: boards on hand first and around their defects, its board and sheet
+   * sizes, kerf and trim. A bad value throws the InputError `takeoffOptionsFor` names.
+   */
+  stock?: StockSettings;
+  /** Whose stock it is, for the page: e.g. `the workshop's stock` or `stock file shop.json`. */
+  stockSource?: string;
   /** The workshop's price list: the pages then carry the cost and a priced shopping list. */
   priceList?: PriceList;
   /** Hardware and finish to cost, by price-list id. */
@@ -35,6 +47,11 @@ const DIAGRAM_GAP_MM = 6;
 const KEY_MIN_MM = 24;
 
 const percent = (share: number): string => `${(share * 100).toFixed(0)} %`;
+
+function boardLengthText(mm: number, units: DrawingUnits): string {
+  const feet = mm / 304.8;
+  return units === 'in' && Math.abs(feet - Math.round(feet)) < 1e-6 ? `${Math.round(feet)} ft` : lengthText(mm, units);
+}
 
 function draft(spec: SheetSpec, name: string, flow: readonly FlowBlock[], views: readonly PlacedView[] = [], flowArea?: Rect): SheetDraft {
   const { widthMm, heightMm } = sheetSizeMm(spec);
@@ -83,6 +100,34 @@ function takeoffBlocks(takeoff: MaterialsTakeoff, units: DrawingUnits): TableBlo
   return blocks;
 }
 
+const listText = (values: readonly string[]): string =>
+  values.length <= 1 ? (values[0] ?? '') : `${values.slice(0, -1).join(', ')} and ${values[values.length - 1]}`;
+
+/** What the layouts cut from: sheet and board sizes, offcuts and boards on hand, kerf and trim. */
+function stockBlock(stock: StockSettings, source: string, units: DrawingUnits): TextBlock {
+  const len = (mm: number) => boardLengthText(mm, units);
+  const defects = stock.boardsInStock.reduce((n, b) => n + b.defects.length, 0);
+  const paragraphs = [
+    `Laid out on ${source}: sheets ${lengthText(Math.min(stock.sheetWidthMm, stock.sheetLengthMm), units)} × ${lengthText(Math.max(stock.sheetWidthMm, stock.sheetLengthMm), units)}; boards for sale ${listText(stock.boardLengthsMm.map(len))} long, ${listText(stock.boardWidthsMm.map((w) => lengthText(w, units)))} wide; saw kerf ${lengthText(stock.kerfMm, units)}, ${lengthText(stock.trimMm, units)} trimmed off each factory edge of a sheet.`,
+  ];
+  if (stock.boardsInStock.length || stock.offcuts.length) {
+    const onHand = stock.boardsInStock.length
+      ? `${stock.boardsInStock.length} board${stock.boardsInStock.length === 1 ? '' : 's'} on hand, cut before any is bought${defects ? `, around ${defects} marked knot${defects === 1 ? '' : 's'}, check${defects === 1 ? '' : 's'} and other defects (hatched in red on the diagrams)` : ''}`
+      : '';
+    const offcuts = stock.offcuts.length ? `${stock.offcuts.reduce((n, o) => n + o.count, 0)} sheet offcut(s) used before full sheets` : '';
+    paragraphs.push(`${listText([onHand, offcuts].filter(Boolean))}.`.replace(/^./, (c) => c.toUpperCase()));
+  }
+  return { type: 'text', title: 'Stock', paragraphs };
+}
+
+/** Grain-matched runs that could not come whole from one board, and why: their brackets are red on the diagrams. */
+function splitBlock(takeoff: MaterialsTakeoff): TableBlock[] {
+  const rows = takeoff.boards.flatMap((b) => b.layout.splitWarnings.map((w) => [`${b.speciesName} ${b.quarters}/4`, w.label, w.message]));
+  return rows.length
+    ? [{ type: 'table', title: 'Grain-matched runs split over boards', head: ['Stock', 'Run', 'Why'], rows, numericColumns: [], footnote: 'Their brackets on the cutting diagrams are drawn in red. Choose wider or longer boards to keep a run from one board.' }]
+    : [];
+}
+
 /** Cost by line and the shopping list; without a price list, the list alone with no prices. */
 function buyingBlocks(takeoff: MaterialsTakeoff, materials: PlanSetMaterials): TableBlock[] {
   const priced = materials.priceList !== undefined;
@@ -121,9 +166,13 @@ function buyingBlocks(takeoff: MaterialsTakeoff, materials: PlanSetMaterials): T
 /** The largest usual scale at which every diagram of `inputs` fits `area` on its own. */
 function diagramScale(inputs: readonly DiagramInput[], area: Rect, units: DrawingUnits): number {
   const longest = Math.max(...inputs.map((d) => d.lengthMm));
-  const widest = Math.max(...inputs.map((d) => d.widthMm));
   const scales = usualScales(units);
-  return scales.find((s) => longest / s <= area.w && widest / s + 8 <= area.h - KEY_MIN_MM) ?? scales[scales.length - 1]!;
+  return scales.find((s) => longest / s <= area.w && Math.max(...inputs.map((d) => diagramHeightMm(d, s))) + 3 <= area.h - KEY_MIN_MM) ?? scales[scales.length - 1]!;
+}
+
+/** Paper height of `d` at 1:`scale` with its title line and any grain-match brackets under it, mm. */
+function diagramHeightMm(d: DiagramInput, scale: number): number {
+  return 5 + d.widthMm / scale + matchRunBandMm(d.matchRuns ?? [], d.lengthMm, scale);
 }
 
 /** Diagrams stacked down as many pages as they need, each page with a key to its numbered parts. */
@@ -134,7 +183,7 @@ function diagramSheets(inputs: readonly DiagramInput[], name: string, spec: Shee
   const pages: DiagramInput[][] = [[]];
   let y = area.y;
   for (const d of inputs) {
-    const h = 5 + d.widthMm / scale;
+    const h = diagramHeightMm(d, scale);
     if (y + h > area.y + area.h - KEY_MIN_MM && pages[pages.length - 1]!.length) {
       pages.push([]);
       y = area.y;
@@ -160,18 +209,17 @@ function diagramSheets(inputs: readonly DiagramInput[], name: string, spec: Shee
   });
 }
 
-const boardLengthText = (mm: number, units: DrawingUnits): string => {
-  const feet = mm / 304.8;
-  return units === 'in' && Math.abs(feet - Math.round(feet)) < 1e-6 ? `${Math.round(feet)} ft` : lengthText(mm, units);
-};
 
 /**
- * The materials summary page and the cutting-diagram pages of `result`. Lays out the default
- * stock when `materials.takeoff` is absent.
+ * The materials summary page and the cutting-diagram pages of `result`. Without
+ * `materials.takeoff`, lays out `materials.stock`, or the default stock without one.
  */
 export function materialsSheets(result: PieceResult, spec: SheetSpec, units: DrawingUnits, materials: PlanSetMaterials = {}): SheetDraft[] {
-  const takeoff = materials.takeoff ?? materialsTakeoff(result);
-  const summary = draft(spec, 'Materials', [...takeoffBlocks(takeoff, units), ...buyingBlocks(takeoff, materials), ...materialsBlocks(result)]);
+  const takeoff = materials.takeoff ?? materialsTakeoff(result, materials.stock ? takeoffOptionsFor(materials.stock) : {});
+  const stock = materials.stock
+    ? stockBlock(materials.stock, materials.stockSource ?? 'the workshop\'s stock', units)
+    : stockBlock(DEFAULT_STOCK_SETTINGS, 'the default stock (no workshop stock was given)', units);
+  const summary = draft(spec, 'Materials', [stock, ...takeoffBlocks(takeoff, units), ...splitBlock(takeoff), ...buyingBlocks(takeoff, materials), ...materialsBlocks(result)]);
   const sheets = takeoff.sheets.flatMap((s) => diagramSheets(
     s.layout.sheets.map((plan, i) => sheetInput(
       `sheet-${s.sheetId}-${i + 1}`,
@@ -184,7 +232,7 @@ export function materialsSheets(result: PieceResult, spec: SheetSpec, units: Dra
     b.layout.boards.map((plan, i) => boardInput(
       `board-${b.speciesId}-${b.quarters}-${i + 1}`,
       `Board ${i + 1} of ${b.layout.boards.length}${plan.inStock ? ' (in stock)' : ''}: ${boardLengthText(plan.lengthMm, units)} × ${lengthText(plan.widthMm, units)}, ${plan.boardFeet.toFixed(1)} bd ft, yield ${percent(plan.yield)}`,
-      boardDiagram(plan, b.layout.kerfMm),
+      boardDiagram(plan, b.layout.kerfMm, b.layout.splitGroups),
     )),
     `Cutting diagrams: ${b.speciesName} ${b.quarters}/4`, spec, units,
   ));

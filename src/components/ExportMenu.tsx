@@ -1,9 +1,8 @@
 import { useEffect, useId, useRef, useState } from 'react';
-import { useParams } from 'react-router-dom';
 import type { PaperSize } from '../../shared/drawing/types.ts';
 import type { PieceResult } from '../../shared/engine/types.ts';
-import { useDesign } from '../api/useDesign.ts';
 import { usePriceList } from '../api/usePriceList.ts';
+import { useStock } from '../api/useStock.ts';
 import { exportFileStem, saveBlob } from '../export/download.ts';
 import type { SvgViewId } from '../export/viewSvg.ts';
 import { usePreferences } from '../state/usePreferences.ts';
@@ -29,25 +28,35 @@ function message(error: unknown): string {
   return error instanceof Error && error.message ? error.message : 'something went wrong';
 }
 
+/** Which stock the materials pages and cutting diagrams are laid out on, in the menu's words. */
+function stockText(stock: ReturnType<typeof useStock>): string {
+  if (stock.isPending) return 'Reading the workshop\'s stock…';
+  if (!stock.data) return 'The workshop\'s stock could not be read: the cutting diagrams use the default stock (6 and 8 ft boards, 4 × 8 ft sheets).';
+  const onHand = stock.data.stock.boardsInStock.length;
+  return `Cutting diagrams use the workshop's stock, as on the Materials page${onHand ? ` (${onHand} board${onHand === 1 ? '' : 's'} on hand first)` : ''}.`;
+}
+
 /**
  * The editor's Export menu: the plan set as a PDF (sheet size, orientation and units chosen
  * here, a progress bar while it draws), one SVG per view, the cut list as CSV and the spec as
  * JSON. `result` is null while the parameters do not build; nothing can be exported then.
- * The plan set's materials pages are costed from the workshop's price list, read (from the
- * query cache, as the editor already holds the design) through the design the route names.
+ * The plan set's materials pages are laid out on the workshop's stock (boards on hand and their
+ * defects, sizes, kerf and trim), as the Materials page lays them out, and costed from the
+ * workshop's price list; both read by the design's `workshopId`.
  */
-export function ExportMenu({ result, title, revision, dirty, workshopName }: {
+export function ExportMenu({ result, title, revision, dirty, workshopName, workshopId }: {
   result: PieceResult | null;
   title: string;
   revision: number;
   /** Unsaved changes: the files say so, because they no longer match the revision. */
   dirty: boolean;
   workshopName: string;
+  /** The design's workshop: its stock and price list go into the plan set. */
+  workshopId: string;
 }) {
   const preferredUnit = usePreferences((s) => s.unit);
-  const { designId } = useParams();
-  const design = useDesign(designId);
-  const prices = usePriceList(design.data?.workshopId);
+  const prices = usePriceList(workshopId);
+  const stock = useStock(workshopId);
   const [open, setOpen] = useState(false);
   const [units, setUnits] = useState<'in' | 'mm'>(preferredUnit);
   const [size, setSize] = useState<PaperSize | null>(null);
@@ -98,6 +107,7 @@ export function ExportMenu({ result, title, revision, dirty, workshopName }: {
       const blob = await exportPlanSet(result, {
         title, revision: revisionText, workshopName, units, sheet: { size: sheetSize, orientation },
         priceList: prices.data?.priceList ?? null,
+        stock: stock.data?.stock ?? null,
         onProgress: (d, total) => setProgress({ done: d, total }),
       });
       saveBlob(blob, `${stem}-plan-set.pdf`);
@@ -160,7 +170,8 @@ export function ExportMenu({ result, title, revision, dirty, workshopName }: {
             <p className="text-xs text-graphite-soft">
               {prices.data?.priceList.items.length
                 ? `The materials page is costed from the workshop's price list (${prices.data.priceList.currency}).`
-                : prices.isPending && design.data ? 'Reading the workshop\'s price list…' : 'No price list in this workshop: the materials page lists what to buy without cost.'}
+                : prices.isPending ? 'Reading the workshop\'s price list…' : 'No price list in this workshop: the materials page lists what to buy without cost.'}
+              {' '}{stockText(stock)}
             </p>
             <button type="button" className="btn btn-primary w-full justify-center" disabled={busy} onClick={() => void exportPdf()}>
               {busy ? 'Drawing the plan set…' : 'Download the plan set'}

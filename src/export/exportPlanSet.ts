@@ -6,6 +6,7 @@ import type { PlanSetOptions } from '../../shared/drawing/planSet.ts';
 import type { PaperSize, SheetSpec } from '../../shared/drawing/types.ts';
 import type { PieceResult, PieceSpec } from '../../shared/engine/types.ts';
 import type { PriceList } from '../../shared/materials/priceList.ts';
+import type { StockSettings } from '../../shared/materials/stockSettings.ts';
 import { extrasOf, suggestedQuantities } from '../materials/extras.ts';
 import { cutListCsv } from './cutListCsv.ts';
 import { specJson } from './specJson.ts';
@@ -20,6 +21,12 @@ export interface ExportPlanSetOptions {
   units: 'in' | 'mm';
   /** The workshop's price list; the materials pages are costed when it prices anything. */
   priceList?: PriceList | null;
+  /**
+   * The workshop's stock: the materials pages and cutting diagrams are laid out on it as the
+   * Materials page lays them out (boards on hand and their defects, sizes, kerf and trim).
+   * Without it, the default stock.
+   */
+  stock?: StockSettings | null;
   /** Told after each sheet: sheets done of the total. */
   onProgress?: (done: number, total: number) => void;
 }
@@ -31,15 +38,18 @@ export function defaultSheet(units: 'in' | 'mm'): SheetSpec {
 }
 
 /**
- * What the plan set is built with: the title block's fields, and the workshop's price list with
- * the hardware and finish the Materials page starts from (finish for the schedule's coats),
- * when the list prices anything. An empty or missing list leaves the materials pages unpriced.
+ * What the plan set is built with: the title block's fields; the workshop's stock to lay the
+ * materials out on; and the workshop's price list with the hardware and finish the Materials
+ * page starts from (finish for the schedule's coats), when the list prices anything. An empty
+ * or missing list leaves the materials pages unpriced; a missing stock lays out the default.
  */
 export function planSetOptions(result: PieceResult, opts: ExportPlanSetOptions): PlanSetOptions {
   const base: PlanSetOptions = { title: opts.title, revision: opts.revision, workshopName: opts.workshopName, sheet: opts.sheet, units: opts.units };
   const list = opts.priceList;
-  if (!list || list.items.length === 0) return base;
-  return { ...base, materials: { priceList: list, extras: extrasOf(list, suggestedQuantities(result, list)) } };
+  const priced = list && list.items.length > 0 ? { priceList: list, extras: extrasOf(list, suggestedQuantities(result, list)) } : null;
+  const stock = opts.stock ? { stock: opts.stock, stockSource: opts.workshopName ? `the stock of ${opts.workshopName}` : 'the workshop\'s stock' } : null;
+  if (!priced && !stock) return base;
+  return { ...base, materials: { ...stock, ...priced } };
 }
 
 /** The whole plan set as a PDF blob. */

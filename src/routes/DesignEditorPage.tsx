@@ -128,7 +128,7 @@ function Editor({ design, role, workshops, approvals }: { design: DesignData; ro
         <ApprovalBadge approval={design.approval} />
         <Link to={linkTo.materials(design.id)} className="btn" title="Cutting diagrams, board feet and sheets, cost and the shopping list">Materials</Link>
         <ExportMenu result={outcome.ok && typedOutcome.ok ? outcome.result : null} title={design.title} revision={baseRevision} dirty={dirty}
-          workshopName={workshops.find((w) => w.id === design.workshopId)?.name ?? ''} />
+          workshopName={workshops.find((w) => w.id === design.workshopId)?.name ?? ''} workshopId={design.workshopId} />
         {canEdit && (
           <div className="flex items-center gap-1" role="group" aria-label="Undo and redo">
             <button type="button" className="btn px-2" onClick={undo} disabled={!history?.past.length} title="Undo (Ctrl+Z)" aria-label="Undo">↶</button>

@@ -2,10 +2,12 @@
  * `casewright plan chest --set width=40in --out chest.pdf`, or
  * `casewright plan path/to/spec.json --format svg --view front --out front.svg`: builds the
  * piece and writes its plan set (PDF), one view (SVG), the cut list (CSV) or the spec (JSON).
- * Everything is built before anything is written, so bad input gives one error line, exit
+ * `--stock stock.json` lays the PDF's materials pages out on a workshop's stock (the file
+ * `layout --stock` reads), `--prices prices.csv` costs them. Everything is built before anything is written, so bad input gives one error line, exit
  * code 2 and no file.
  */
 import { readFileSync, writeFileSync } from 'node:fs';
+import { basename } from 'node:path';
 import { buildPlanSet } from '../../../shared/drawing/planSet.ts';
 import type { PaperSize } from '../../../shared/drawing/types.ts';
 import { buildPiece } from '../../../shared/engine/index.ts';
@@ -19,6 +21,7 @@ import { specJson } from '../../../src/export/specJson.ts';
 import { SVG_VIEWS, viewSvg } from '../../../src/export/viewSvg.ts';
 import { choiceOption } from '../options.ts';
 import { fromUserCwd } from '../paths.ts';
+import { readStockFile, STOCK_FILE_FIELDS } from '../stockFile.ts';
 import { specFromArguments } from './cutlist.ts';
 import type { RegisterCommand } from './index.ts';
 
@@ -34,6 +37,7 @@ interface PlanOptions {
   workshop?: string;
   date?: string;
   prices?: string;
+  stock?: string;
   out?: string;
 }
 
@@ -72,7 +76,11 @@ export async function planOutput(target: string, opts: PlanOptions): Promise<{ d
   const sheet = { size, orientation };
   switch (format) {
     case 'pdf': {
-      const model = buildPlanSet(result, { ...info, sheet, ...(opts.prices === undefined ? {} : { materials: { priceList: readPriceList(opts.prices) } }) });
+      const materials = {
+        ...(opts.prices === undefined ? {} : { priceList: readPriceList(opts.prices) }),
+        ...(opts.stock === undefined ? {} : { stock: readStockFile(opts.stock), stockSource: `the stock file ${basename(opts.stock)}` }),
+      };
+      const model = buildPlanSet(result, { ...info, sheet, materials });
       return { data: new Uint8Array(await renderPlanSetPdf(model, await monoFontsNode())), format };
     }
     case 'svg': {
@@ -102,7 +110,10 @@ export const registerPlan: RegisterCommand = (program) => {
     .option('--workshop <text>', 'workshop name for the title block')
     .option('--date <YYYY-MM-DD>', 'date for the title block (default today)')
     .option('--prices <file>', 'a price list CSV (kind,item,thickness,price,unit,name) to cost the job in the PDF')
+    .option('--stock <file>', 'a workshop stock file (JSON, lengths in mm, as `layout --stock` reads it) to lay the PDF\'s materials pages out on: boards on hand first and around their defects; see below')
     .option('--out <file>', 'file to write; without it svg, csv and json go to stdout')
+    .addHelpText('after', `${STOCK_FILE_FIELDS}
+and nothing is drawn. Without --stock the materials pages use the default stock.`)
     .action(async (piece: string, opts: PlanOptions) => {
       const { data, format } = await planOutput(piece, opts);
       if (opts.out) {

@@ -1,11 +1,13 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { materialsSheets } from '../../../shared/drawing/materialsPages.ts';
-import type { Label, TableBlock } from '../../../shared/drawing/types.ts';
+import type { Label, PlacedView, Segment, TableBlock, TextBlock } from '../../../shared/drawing/types.ts';
 import { buildPiece, defaultSpec, type PieceResult } from '../../../shared/engine/index.ts';
 import { costOf } from '../../../shared/materials/cost.ts';
 import { centsText } from '../../../shared/materials/money.ts';
 import { parsePriceListCsv } from '../../../shared/materials/priceListCsv.ts';
+import { DEFAULT_STOCK_SETTINGS, takeoffOptionsFor, type StockSettings } from '../../../shared/materials/stockSettings.ts';
 import { materialsTakeoff, type MaterialsTakeoff } from '../../../shared/materials/takeoff.ts';
+import { matchRunsOf } from '../../../shared/layout/diagram.ts';
 
 /** Paper mm: a diagram drawn to scale matches its stock to a hundredth of a millimetre. */
 const PAPER_TOLERANCE_MM = 0.01;
@@ -85,5 +87,89 @@ describe('materialsSheets', () => {
     expect(list.head).not.toContain('Cost');
     expect(list.footnote).toMatch(/No price list/);
     expect(list.rows.length).toBeGreaterThan(0);
+  });
+});
+
+const IN = 25.4;
+/** Paper mm: brackets are drawn at the run's ends to this. */
+const BRACKET_TOLERANCE_MM = 0.01;
+
+/** A workshop that buys 10 ft × 12 in boards only: long enough for a whole column of drawer fronts. */
+function tenFootStock(extra: Partial<StockSettings> = {}): StockSettings {
+  return { ...DEFAULT_STOCK_SETTINGS, boardLengthsMm: [120 * IN], boardWidthsMm: [12 * IN], ...extra };
+}
+
+const segments = (view: PlacedView): Segment[] => view.primitives.filter((p): p is Segment => p.type === 'segment');
+const labels = (view: PlacedView): Label[] => view.primitives.filter((p): p is Label => p.type === 'label');
+
+describe('materialsSheets on a workshop\'s stock', () => {
+  let dresser: PieceResult;
+  beforeAll(() => {
+    dresser = buildPiece(defaultSpec('dresser'));
+  });
+
+  it('brackets each column of grain-matched drawer fronts under its board on 10 ft × 12 in boards, with its note', () => {
+    const stock = tenFootStock();
+    const sheets = materialsSheets(dresser, SHEET, 'in', { stock });
+    const done = materialsTakeoff(dresser, takeoffOptionsFor(stock));
+    const runs = done.boards.flatMap((b) => b.layout.boards.flatMap((plan, i) => matchRunsOf(plan, b.layout.splitGroups).map((run) => ({ run, id: `board-${b.speciesId}-${b.quarters}-${i + 1}` }))));
+    const columns = new Set(done.boards.flatMap((b) => b.layout.boards.flatMap((p) => p.parts.flatMap((q) => (q.matchGroup === null || q.matchOrder === null ? [] : [q.matchGroup])))));
+    // Runs are the ordered groups (drawer-front columns); every column's fronts come from one board on 10 ft boards: one bracket per column, none split.
+    expect(columns.size).toBeGreaterThan(1);
+    expect(runs.map((r) => r.run.group).sort()).toEqual([...columns].sort());
+    expect(runs.every((r) => !r.run.partial)).toBe(true);
+    const views = sheets.flatMap((s) => s.views);
+    for (const { run, id } of runs) {
+      const view = views.find((v) => v.id === id)!;
+      const note = labels(view).find((l) => l.text === run.text);
+      expect(note, `${run.text} on ${view.title}`).toBeDefined();
+      expect(run.text).toMatch(/^grain-matched: .*column \d+ \(1–\d+\)$/);
+      // The bracket's line runs under the board from the run's first part to its last.
+      const [from, to] = [view.geometry.x + run.fromMm / view.scale, view.geometry.x + run.toMm / view.scale];
+      const under = view.geometry.y + view.geometry.h;
+      const line = segments(view).find((s) => s.a[1] === s.b[1] && s.a[1] > under
+        && Math.abs(Math.min(s.a[0], s.b[0]) - from) < BRACKET_TOLERANCE_MM && Math.abs(Math.max(s.a[0], s.b[0]) - to) < BRACKET_TOLERANCE_MM);
+      expect(line, `bracket of ${run.text}`).toBeDefined();
+      // The note sits inside the diagram's frame, so the next diagram does not cover it.
+      expect(note!.at[1]).toBeLessThanOrEqual(view.frame.y + view.frame.h);
+    }
+  });
+
+  it('marks a run split over boards in red and lists why it was split', () => {
+    // 4 ft boards are too short for a column of fronts end to end.
+    const sheets = materialsSheets(dresser, SHEET, 'in', { stock: tenFootStock({ boardLengthsMm: [48 * IN] }) });
+    const split = tables(sheets).find((t) => t.title === 'Grain-matched runs split over boards');
+    expect(split, 'no table of split runs').toBeDefined();
+    expect(split!.rows.length).toBeGreaterThan(0);
+    const notes = sheets.flatMap((s) => s.views).flatMap(labels).filter((l) => l.text.endsWith('split over boards'));
+    expect(notes.length).toBeGreaterThan(0);
+    expect(notes.every((l) => l.accent === true)).toBe(true);
+  });
+
+  it('cuts the boards on hand first and draws their knots, and says which stock it laid out', () => {
+    const oak = result.parts.find((p) => p.material.kind === 'solid')!;
+    const quarters = oak.rough.quarters;
+    const speciesId = oak.material.kind === 'solid' ? oak.material.speciesId : '';
+    const stock = tenFootStock({
+      boardsInStock: [{ label: 'Rack A', speciesId, quarters, lengthMm: 96 * IN, widthMm: 10 * IN, defects: [{ kind: 'knot', fromEndMm: 600, fromEdgeMm: 40, lengthMm: 40, widthMm: 30 }] }],
+    });
+    const sheets = materialsSheets(result, SHEET, 'in', { stock, stockSource: 'the stock of Test workshop' });
+    const first = sheets.flatMap((s) => s.views).find((v) => v.id === `board-${speciesId}-${quarters}-1`)!;
+    expect(first.title).toContain('(in stock)');
+    expect(labels(first).some((l) => l.text === 'knot' && l.accent)).toBe(true);
+    const text = sheets[0]!.flow.filter((b): b is TextBlock => b.type === 'text').flatMap((b) => b.paragraphs).join(' ');
+    expect(text).toContain('Laid out on the stock of Test workshop');
+    expect(text).toContain('1 board on hand, cut before any is bought, around 1 marked knot');
+    expect(text).toContain('10 ft long, 12" wide');
+  });
+
+  it('says it used the default stock when given none', () => {
+    const text = materialsSheets(result, SHEET, 'in', { takeoff })[0]!.flow.filter((b): b is TextBlock => b.type === 'text').flatMap((b) => b.paragraphs).join(' ');
+    expect(text).toContain('Laid out on the default stock');
+    expect(text).toContain('6 ft and 8 ft long');
+  });
+
+  it('names the bad field of a stock it cannot lay out', () => {
+    expect(() => materialsSheets(result, SHEET, 'in', { stock: tenFootStock({ kerfMm: -1 }) })).toThrow(expect.objectContaining({ name: 'InputError', field: 'kerfMm' }));
   });
 });

@@ -3,6 +3,7 @@ import { buildPlanSet } from '../../../shared/drawing/planSet.ts';
 import type { TableBlock } from '../../../shared/drawing/types.ts';
 import { buildPiece, defaultSpec } from '../../../shared/engine/index.ts';
 import type { PriceList } from '../../../shared/materials/priceList.ts';
+import { DEFAULT_STOCK_SETTINGS, type StockSettings } from '../../../shared/materials/stockSettings.ts';
 import { planSetOptions, type ExportPlanSetOptions } from '../../../src/export/exportPlanSet.ts';
 
 // Invented prices for Casewright's fictional workshop, not market data.
@@ -57,5 +58,33 @@ describe('planSetOptions', () => {
 
   it('keeps the title block fields as given', () => {
     expect(planSetOptions(result, base)).toEqual({ title: 'Chest', revision: '3', workshopName: 'Test workshop', sheet: { size: 'letter', orientation: 'landscape' }, units: 'in' });
+  });
+
+  it('lays the materials out on the workshop\'s stock, as the Materials page does, and says whose it is', () => {
+    const oak = result.parts.find((p) => p.material.kind === 'solid')!;
+    if (oak.material.kind !== 'solid') throw new Error('no solid part');
+    // Invented stock: one board on hand with a knot, 10 ft × 12 in boards for sale, a 1/16 in kerf.
+    const stock: StockSettings = {
+      ...DEFAULT_STOCK_SETTINGS, boardLengthsMm: [3048], boardWidthsMm: [304.8], kerfMm: 1.5875,
+      boardsInStock: [{ speciesId: oak.material.speciesId, quarters: oak.rough.quarters, lengthMm: 2438.4, widthMm: 254, defects: [{ kind: 'knot', fromEndMm: 500, fromEdgeMm: 30, lengthMm: 40, widthMm: 30 }] }],
+    };
+    const opts = planSetOptions(result, { ...base, stock });
+    expect(opts.materials?.stock).toBe(stock);
+    expect(opts.materials?.priceList).toBeUndefined();
+    const model = buildPlanSet(result, { ...opts, date: '2025-06-01' });
+    const page = model.sheets.find((s) => s.name === 'Materials')!;
+    const words = page.flow.flatMap((b) => (b.type === 'text' ? b.paragraphs : [])).join(' ');
+    expect(words).toContain('Laid out on the stock of Test workshop');
+    expect(words).toContain('saw kerf 1/16"');
+    const boards = model.sheets.flatMap((s) => s.views).filter((v) => v.id.startsWith(`board-${oak.material.kind === 'solid' ? oak.material.speciesId : ''}-${oak.rough.quarters}-`));
+    expect(boards[0]?.title).toContain('(in stock)');
+    expect(boards[0]?.primitives.some((p) => p.type === 'label' && p.text === 'knot')).toBe(true);
+    expect(boards.slice(1).every((v) => v.title.includes('10 ft × 12"'))).toBe(true);
+  });
+
+  it('keeps the stock and the price list together when both are given', () => {
+    const opts = planSetOptions(result, { ...base, priceList: PRICES, stock: DEFAULT_STOCK_SETTINGS });
+    expect(opts.materials?.stock).toBe(DEFAULT_STOCK_SETTINGS);
+    expect(opts.materials?.priceList).toBe(PRICES);
   });
 });
