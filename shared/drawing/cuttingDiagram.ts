@@ -19,11 +19,11 @@ const TAG_MIN_PT = 3;
 /** Height of the line over a diagram that names it, mm. */
 export const DIAGRAM_TITLE_MM = 5;
 /** Size of a grain-match run's note under its bracket, pt. */
-const RUN_NOTE_PT = 5;
+const RUN_NOTE_PT = 6;
 /** From the board's edge to its brackets, the brackets' ticks, and one row of bracket notes, mm. */
 const RUN_GAP_MM = 1;
 const RUN_TICK_MM = 1;
-const RUN_ROW_MM = 2.4;
+const RUN_ROW_MM = 2.8;
 
 /** A diagram to draw: a sheet's or a board's, with the words over it. */
 export interface DiagramInput {

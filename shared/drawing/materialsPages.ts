@@ -12,7 +12,7 @@ import { costOf, type ExtraItem } from '../materials/cost.ts';
 import { centsText } from '../materials/money.ts';
 import type { PriceList } from '../materials/priceList.ts';
 import { shoppingList } from '../materials/shoppingList.ts';
-import { DEFAULT_STOCK_SETTINGS, takeoffOptionsFor, type StockSettings } from '../materials/stockSettings.ts';
+import { DEFAULT_STOCK_SETTINGS, DEFECT_NAMES, takeoffOptionsFor, type StockSettings } from '../materials/stockSettings.ts';
 import { materialsTakeoff, type MaterialsTakeoff } from '../materials/takeoff.ts';
 import { boardInput, diagramPartSize, drawDiagram, matchRunBandMm, sheetInput, type DiagramInput } from './cuttingDiagram.ts';
 import { lengthText, type DrawingUnits } from './lengthText.ts';
@@ -45,6 +45,15 @@ type SheetDraft = Omit<Sheet, 'number'>;
 const DIAGRAM_GAP_MM = 6;
 /** Height of the title and first rows of a key table, mm: a page keeps it for a key. */
 const KEY_MIN_MM = 24;
+/**
+ * A key table's title, head and spacing, and each of its rows, mm: a 7.5 pt line at 1.15 leading
+ * with 1 mm padding above and below is 5.0 mm; a little over, so a key does not spill.
+ */
+const KEY_EXTRA_MM = 16;
+const KEY_ROW_MM = 5.2;
+
+/** Height of a key of `rows` numbered parts, mm; none without rows. */
+const keyHeightMm = (rows: number): number => (rows ? KEY_EXTRA_MM + rows * KEY_ROW_MM : 0);
 
 const percent = (share: number): string => `${(share * 100).toFixed(0)} %`;
 
@@ -106,13 +115,16 @@ const listText = (values: readonly string[]): string =>
 /** What the layouts cut from: sheet and board sizes, offcuts and boards on hand, kerf and trim. */
 function stockBlock(stock: StockSettings, source: string, units: DrawingUnits): TextBlock {
   const len = (mm: number) => boardLengthText(mm, units);
-  const defects = stock.boardsInStock.reduce((n, b) => n + b.defects.length, 0);
+  // Defects counted by kind in the diagrams' words: `1 knot and 2 checks`.
+  const kinds = new Map<string, number>();
+  for (const d of stock.boardsInStock.flatMap((b) => b.defects)) kinds.set(DEFECT_NAMES[d.kind], (kinds.get(DEFECT_NAMES[d.kind]) ?? 0) + 1);
+  const defects = listText([...kinds].map(([name, n]) => `${n} ${name}${n === 1 ? '' : 's'}`));
   const paragraphs = [
     `Laid out on ${source}: sheets ${lengthText(Math.min(stock.sheetWidthMm, stock.sheetLengthMm), units)} × ${lengthText(Math.max(stock.sheetWidthMm, stock.sheetLengthMm), units)}; boards for sale ${listText(stock.boardLengthsMm.map(len))} long, ${listText(stock.boardWidthsMm.map((w) => lengthText(w, units)))} wide; saw kerf ${lengthText(stock.kerfMm, units)}, ${lengthText(stock.trimMm, units)} trimmed off each factory edge of a sheet.`,
   ];
   if (stock.boardsInStock.length || stock.offcuts.length) {
     const onHand = stock.boardsInStock.length
-      ? `${stock.boardsInStock.length} board${stock.boardsInStock.length === 1 ? '' : 's'} on hand, cut before any is bought${defects ? `, around ${defects} marked knot${defects === 1 ? '' : 's'}, check${defects === 1 ? '' : 's'} and other defects (hatched in red on the diagrams)` : ''}`
+      ? `${stock.boardsInStock.length} board${stock.boardsInStock.length === 1 ? '' : 's'} on hand, cut before any is bought${defects ? ` and around the ${defects} marked on them (in red on the diagrams)` : ''}`
       : '';
     const offcuts = stock.offcuts.length ? `${stock.offcuts.reduce((n, o) => n + o.count, 0)} sheet offcut(s) used before full sheets` : '';
     paragraphs.push(`${listText([onHand, offcuts].filter(Boolean))}.`.replace(/^./, (c) => c.toUpperCase()));
@@ -175,21 +187,29 @@ function diagramHeightMm(d: DiagramInput, scale: number): number {
   return 5 + d.widthMm / scale + matchRunBandMm(d.matchRuns ?? [], d.lengthMm, scale);
 }
 
-/** Diagrams stacked down as many pages as they need, each page with a key to its numbered parts. */
+/**
+ * Diagrams stacked down as many pages as they need, each page with a key to its numbered parts
+ * under them: a diagram goes on the next page when it and the key rows it adds would not fit.
+ */
 function diagramSheets(inputs: readonly DiagramInput[], name: string, spec: SheetSpec, units: DrawingUnits): SheetDraft[] {
   if (!inputs.length) return [];
   const area = drawingArea(spec);
   const scale = diagramScale(inputs, area, units);
   const pages: DiagramInput[][] = [[]];
   let y = area.y;
+  let keyRows = 0;
   for (const d of inputs) {
     const h = diagramHeightMm(d, scale);
-    if (y + h > area.y + area.h - KEY_MIN_MM && pages[pages.length - 1]!.length) {
+    const tagged = drawDiagram(d, scale, [0, 0], units).tagOnly.length;
+    const key = Math.max(KEY_MIN_MM, keyHeightMm(keyRows + tagged));
+    if (y + h + DIAGRAM_GAP_MM > area.y + area.h - key && pages[pages.length - 1]!.length) {
       pages.push([]);
       y = area.y;
+      keyRows = 0;
     }
     pages[pages.length - 1]!.push(d);
     y += h + DIAGRAM_GAP_MM;
+    keyRows += tagged;
   }
   return pages.map((page, i) => {
     let at = area.y;

@@ -159,7 +159,7 @@ describe('materialsSheets on a workshop\'s stock', () => {
     expect(labels(first).some((l) => l.text === 'knot' && l.accent)).toBe(true);
     const text = sheets[0]!.flow.filter((b): b is TextBlock => b.type === 'text').flatMap((b) => b.paragraphs).join(' ');
     expect(text).toContain('Laid out on the stock of Test workshop');
-    expect(text).toContain('1 board on hand, cut before any is bought, around 1 marked knot');
+    expect(text).toContain('1 board on hand, cut before any is bought and around the 1 knot marked on them (in red on the diagrams)');
     expect(text).toContain('10 ft long, 12" wide');
   });
 
@@ -167,6 +167,19 @@ describe('materialsSheets on a workshop\'s stock', () => {
     const text = materialsSheets(result, SHEET, 'in', { takeoff })[0]!.flow.filter((b): b is TextBlock => b.type === 'text').flatMap((b) => b.paragraphs).join(' ');
     expect(text).toContain('Laid out on the default stock');
     expect(text).toContain('6 ft and 8 ft long');
+  });
+
+  it('leaves room under the diagrams of each page for its whole key of numbered parts', () => {
+    // A 7.5 pt table row is about 5 mm; title and head about 11 mm (planSetPdf's table styles).
+    const rowMm = 5.0;
+    const headMm = 11;
+    const sheets = materialsSheets(dresser, SHEET, 'in', { stock: tenFootStock() }).filter((s) => s.views.length);
+    const keyed = sheets.filter((s) => tables([s]).length);
+    expect(keyed.length).toBeGreaterThan(0);
+    for (const sheet of keyed) {
+      const rows = tables([sheet])[0]!.rows.length;
+      expect(sheet.flowArea.h, sheet.name).toBeGreaterThanOrEqual(headMm + rows * rowMm);
+    }
   });
 
   it('names the bad field of a stock it cannot lay out', () => {
