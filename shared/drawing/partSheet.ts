@@ -33,9 +33,20 @@ const HOLE_GROUP_MIN = 3;
 
 /**
  * The cut table's rows: one per cut, except that like holes or slots on one face (shelf-pin
- * lines, screw slots) share a row with their count, their centres being dimensioned on the drawing.
+ * lines, screw slots) share a row with their count, their centres being dimensioned on the drawing,
+ * and a rabbet and the tongue it leaves on one edge or end share a row, as they are one cut.
  */
 export function cutRows(part: Part, units: DrawingUnits): string[][] {
+  const byFace = (type: Feature['type']) => new Map(part.features.filter((f) => f.type === type).map((f) => [f.face, f]));
+  const rabbets = byFace('rabbet');
+  const tongues = byFace('tongue');
+  const oneOnFace = (f: Feature) => part.features.filter((g) => g.face === f.face && g.type === f.type).length === 1;
+  // The rabbet each tongue is left by: the only rabbet and the only tongue on that face.
+  const pairs = new Map([...tongues].flatMap(([face, tongue]) => {
+    const rabbet = rabbets.get(face);
+    return rabbet && oneOnFace(rabbet) && oneOnFace(tongue) ? [[rabbet.id, tongue] as const] : [];
+  }));
+  const paired = new Set([...pairs.values()].map((t) => t.id));
   const holes = new Map<string, Feature[]>();
   for (const f of part.features) {
     if (f.type !== 'hole' && f.type !== 'slot') continue;
@@ -45,6 +56,13 @@ export function cutRows(part: Part, units: DrawingUnits): string[][] {
   const grouped = new Set([...holes.values()].filter((g) => g.length >= HOLE_GROUP_MIN).flatMap((g) => g.map((f) => f.id)));
   const rows: string[][] = [];
   for (const f of part.features) {
+    if (paired.has(f.id)) continue;
+    const tongue = pairs.get(f.id);
+    if (tongue && tongue.type === 'tongue') {
+      // The rabbet's own note says it leaves the tongue; the row says so already.
+      rows.push(['Rabbet and tongue', featureFaceText(f), `rabbet ${featureSizeText(f, units)}, leaving a tongue ${lengthText(tongue.lengthMm, units)} long × ${lengthText(tongue.thicknessMm, units)} thick`, `${tongue.label}; ${f.label.replace(/, leaving the tongue$/, '')}`]);
+      continue;
+    }
     if (!grouped.has(f.id)) {
       rows.push([featureKindText(f), featureFaceText(f), featureSizeText(f, units), f.label]);
       continue;
@@ -54,7 +72,25 @@ export function cutRows(part: Part, units: DrawingUnits): string[][] {
     if (f.type === 'slot') rows.push([`Slots (${group.length})`, featureFaceText(f), `${lengthText(f.diameterMm, units)} wide × ${lengthText(f.slotLengthMm, units)} long (along the ${f.along}), ${lengthText(f.depthMm, units)} deep; centres as dimensioned on the drawing`, f.label]);
     else if (f.type === 'hole') rows.push([`Holes (${group.length})`, featureFaceText(f), `${lengthText(f.diameterMm, units)} diameter × ${lengthText(f.depthMm, units)} deep; centres as dimensioned on the drawing`, f.label]);
   }
-  return rows;
+  return mergeLikeRows(rows);
+}
+
+/**
+ * Rows alike but for where the cut is, on two edges, ends or faces of one kind, as one row:
+ * `edges A and B`. A panel's two long edges, rabbeted alike, are then one line of the table.
+ */
+function mergeLikeRows(rows: readonly string[][]): string[][] {
+  const out: string[][] = [];
+  const taken = new Set<number>();
+  rows.forEach((row, i) => {
+    if (taken.has(i)) return;
+    const [kind, letter] = row[1]!.split(' ');
+    const twin = rows.findIndex((r, j) => j > i && !taken.has(j) && r[0] === row[0] && r[2] === row[2] && r[3] === row[3] && r[1]!.split(' ')[0] === kind);
+    if (twin < 0 || letter === undefined) return out.push(row);
+    taken.add(twin);
+    out.push([row[0]!, `${kind}s ${letter} and ${rows[twin]![1]!.split(' ')[1]}`, row[2]!, row[3]!]);
+  });
+  return out;
 }
 
 interface Laid {

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { primitiveRect } from '../../../shared/drawing/dimensionLayout.ts';
 import { lengthText } from '../../../shared/drawing/lengthText.ts';
 import { partLetters } from '../../../shared/drawing/partLetters.ts';
-import { partSheet } from '../../../shared/drawing/partSheet.ts';
+import { cutRows, partSheet } from '../../../shared/drawing/partSheet.ts';
 import { rectsOverlap, rectUnion } from '../../../shared/drawing/rects.ts';
 import type { Primitive, Rect, Sheet } from '../../../shared/drawing/types.ts';
 import type { Part } from '../../../shared/engine/types.ts';
@@ -83,5 +83,23 @@ describe('partSheet', () => {
     const tongue = panel.part.features.find((f) => f.type === 'tongue')!;
     if (rabbet.type !== 'rabbet' || tongue.type !== 'tongue') throw new Error('feature kinds');
     expect(texts).toEqual(expect.arrayContaining([lengthText(rabbet.depthMm, 'in'), lengthText(tongue.thicknessMm, 'in')]));
+  });
+});
+
+describe('cutRows', () => {
+  it('writes a rabbet and the tongue it leaves as one row, and like cuts on both long edges as one row', () => {
+    const panel = built.chest.find((b) => b.part.name === 'Front/back panel')!.part;
+    const rabbets = panel.features.filter((f) => f.type === 'rabbet');
+    const rows = cutRows(panel, 'in');
+    expect(rabbets.length).toBe(4);
+    expect(rows.every((r) => r[0] === 'Rabbet and tongue')).toBe(true);
+    expect(rows.map((r) => r[1])).toEqual(['edges A and B', 'end A', 'end B']);
+    for (const r of rabbets) {
+      const tongue = panel.features.find((f) => f.type === 'tongue' && f.face === r.face);
+      if (tongue?.type !== 'tongue' || r.type !== 'rabbet') throw new Error(`no tongue on ${r.face}`);
+      const row = rows.find((x) => x[1]!.includes(r.face.split('-')[1]!.toUpperCase()) && x[1]!.startsWith(r.face.split('-')[0]!))!;
+      expect(row[2]).toContain(`rabbet ${lengthText(r.widthMm, 'in')} wide × ${lengthText(r.depthMm, 'in')} deep`);
+      expect(row[2]).toContain(`leaving a tongue ${lengthText(tongue.lengthMm, 'in')} long × ${lengthText(tongue.thicknessMm, 'in')} thick`);
+    }
   });
 });

@@ -101,6 +101,12 @@ describe('renderPlanSetPdf', () => {
     expect(fonts).toMatch(/JetBrainsMono\S*\s+CID TrueType\s+Identity-H\s+yes/);
   });
 
+  it('fits every part drawing, cut table and all, on one sheet', () => {
+    const continued = pages.filter((p) => /Part [A-Z]+: .*\(continued\)/.test(p));
+    expect(continued.map((p) => /Part [A-Z]+: [^\n]*?\(continued\)/.exec(p)![0])).toEqual([]);
+    expect(pages.filter((p) => /Part [A-Z]+: /.test(p)).length).toBe(partLetters(result).size);
+  });
+
   it('renders no blank page', () => {
     execFileSync('pdftoppm', ['-gray', '-r', '25', pdfPath, join(dir, 'page')]);
     const files = readdirSync(dir).filter((f) => f.startsWith('page') && f.endsWith('.pgm')).sort();
