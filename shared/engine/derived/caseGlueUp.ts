@@ -22,6 +22,11 @@ export function caseGlueUpStages(parts: readonly Part[]): GlueUpStage[] {
   // A carcass's web frames are glued up flat, then let into the sides with the bottom and top.
   const webFrameParts = legs.length > 0 ? [] : parts.filter((p) => p.id.startsWith('web-frame') || p.id.startsWith('dust-panel')).map((p) => p.id);
   const dustPanels = webFrameParts.filter((id) => id.startsWith('dust-panel'));
+  // Runners that belong to a web frame are glued in with it; any other runner (a carcass's
+  // runners, the slide spacers on a framed case's runners) is screwed in once the case is together.
+  const runners = ids(parts, ['runner']);
+  const webFrameRunners = runners.filter((id) => id.startsWith('web-frame'));
+  const screwedRunners = runners.filter((id) => !id.startsWith('web-frame'));
   const framed: Omit<GlueUpStage, 'stage'>[] = legs.length === 0 ? [] : [
     {
       title: 'The two sides on their legs',
@@ -30,7 +35,7 @@ export function caseGlueUpStages(parts: readonly Part[]): GlueUpStage[] {
     },
     {
       title: 'Join the sides with the back and the web frames',
-      steps: [{ title: 'Glue the back rails and the web frames\' rails into the legs, the back panel in dry', partIds: [...joining, ...ids(parts, ['runner']), ...framedPanels.filter((id) => !id.startsWith('side-'))], notes: ['Glue the runners into the front rails only.', 'Dry-fit first; check the case for square and the web frames for level.'] }],
+      steps: [{ title: 'Glue the back rails and the web frames\' rails into the legs, the back panel in dry', partIds: [...joining, ...webFrameRunners, ...framedPanels.filter((id) => !id.startsWith('side-'))], notes: ['Glue the runners into the front rails only.', 'Dry-fit first; check the case for square and the web frames for level.'] }],
       floatingPartIds: framedPanels.filter((id) => !id.startsWith('side-')),
     },
   ];
@@ -59,16 +64,16 @@ export function caseGlueUpStages(parts: readonly Part[]): GlueUpStage[] {
     {
       title: 'Face frame, base and runners',
       steps: [
-        { title: 'Glue the face frame to the carcass', partIds: [...ids(parts, ['face-frame']), ...ids(parts, ['case-side'])], notes: ['Clamp with cauls; the frame may stand proud a hair and be planed flush.'] },
+        { title: 'Glue the face frame to the carcass', partIds: ids(parts, ['face-frame']), notes: ['Clamp with cauls; the frame may stand proud a hair and be planed flush.'] },
         { title: 'Build the base and screw the carcass down to it', partIds: ids(parts, ['base']), notes: ['Level the base on the floor first.'] },
-        { title: 'Screw in the drawer runners or slides', partIds: ids(parts, ['runner']).filter((id) => !webFrameParts.includes(id)), notes: ['Set them level and parallel from a spacer board.'] },
+        { title: 'Screw in the drawer runners or slides', partIds: screwedRunners, notes: ['Set them level and parallel from a spacer board.'] },
       ].filter((s) => s.partIds.length > 0),
       floatingPartIds: [],
     },
     {
       title: 'Top, fronts and doors',
       steps: [
-        { title: 'Screw the top on through the stretchers: round holes at the front, slots at the back', partIds: ids(parts, ['top', 'stretcher']), notes: ['Screws at the centre of each slot; no glue.'] },
+        { title: 'Screw the top on through the stretchers: round holes at the front, slots at the back', partIds: ids(parts, ['top']), notes: ['Screws at the centre of each slot; no glue.'] },
         { title: 'Screw the drawer fronts to the boxes', partIds: ids(parts, ['drawer-front', 'drawer-end']), notes: ['Set the reveals with spacers before driving the screws.'] },
         { title: 'Hang the doors', partIds: ids(parts, ['door', 'door-frame']), notes: ['Adjust the hinges for even gaps.'] },
         { title: 'Drop in the adjustable shelves', partIds: ids(parts, ['shelf']), notes: [] },
