@@ -4,7 +4,8 @@
  * dimensions whose lines and texts do not overlap (with a gap); lower tiers (feature sizes) take
  * the rows nearest the drawing and every higher tier starts beyond them, so overall sizes are
  * outermost; a text that does not fit between its extension lines goes beside the line, right
- * or above first, else left or below.
+ * or above first, else left or below, and slides further out along its row (the dimension line
+ * drawn on to it) rather than sit across another dimension's extension line.
  */
 import { placeNotes } from './notePlacement.ts';
 import { inflate, rectsOverlap, rectUnion } from './rects.ts';
@@ -50,9 +51,10 @@ function seg(a: Pt, b: Pt): Primitive {
 /**
  * Draws one dimension on a row at `rowAt` (paper y for horizontal, x for vertical). `p0`, `p1`
  * are the measured points on paper with p0 ≤ p1 along the axis. `textPlace` picks where the
- * text goes; returns the primitives and the interval they take along the row.
+ * text goes; a text beside the line moves `slide` mm further out, the line drawn on to it.
+ * Returns the primitives and the interval they take along the row.
  */
-function drawDimension(req: DimensionRequest, p0: Pt, p1: Pt, side: Side, rowAt: number, textPlace: 'inside' | 'after' | 'before', insideCentre?: number): PlacedDim {
+function drawDimension(req: DimensionRequest, p0: Pt, p1: Pt, side: Side, rowAt: number, textPlace: 'inside' | 'after' | 'before', insideCentre?: number, slide = 0): PlacedDim {
   const horizontal = req.axis === 'h';
   const lo = horizontal ? p0[0] : p0[1];
   const hi = horizontal ? p1[0] : p1[1];
@@ -83,22 +85,29 @@ function drawDimension(req: DimensionRequest, p0: Pt, p1: Pt, side: Side, rowAt:
   let textLo: number;
   const centreInside = insideCentre ?? (lo + hi) / 2;
   if (textPlace === 'inside') textLo = centreInside - textW / 2;
-  else if (textPlace === 'after') textLo = hi + (arrowsInside ? 1.2 : ARROW_MM + 2.8);
-  else textLo = lo - (arrowsInside ? 1.2 : ARROW_MM + 2.8) - textW;
+  else if (textPlace === 'after') textLo = hi + (arrowsInside ? 1.2 : ARROW_MM + 2.8) + slide;
+  else textLo = lo - (arrowsInside ? 1.2 : ARROW_MM + 2.8) - textW - slide;
+  const vCentre = textPlace === 'inside' ? centreInside : verticalTextCentre(lo, hi, textW, textPlace, arrowsInside) + (textPlace === 'after' ? -slide : slide);
+  if (slide > 0 && textPlace !== 'inside') {
+    // The line runs on to the slid text, so it still reads as this dimension's.
+    const lineEnd = { lo: arrowsInside ? lo : lo - ARROW_MM - 2, hi: arrowsInside ? hi : hi + ARROW_MM + 2 };
+    const [textA, textB] = horizontal ? [textLo, textLo + textW] : [vCentre - textW / 2, vCentre + textW / 2];
+    const towardHigh = horizontal ? textPlace === 'after' : textPlace === 'before';
+    out.push(towardHigh ? seg(at(lineEnd.hi), at(textA - 0.5)) : seg(at(textB + 0.5), at(lineEnd.lo)));
+  }
 
   // Text sits on the far side of the line from the drawing for horizontal rows below, and on the
   // near side otherwise, so it reads upright and never crosses the line.
   const label: Label = horizontal
     ? { type: 'label', at: pt(textLo + textW / 2, rowAt - TEXT_GAP_MM), text: req.text, sizePt: DIM_TEXT_PT, anchor: 'middle', font: 'mono' }
     : // Vertical: text turned to read from the bottom, centred along the row; y runs down, so "after" is toward smaller y.
-      { type: 'label', at: pt(rowAt - TEXT_GAP_MM, textPlace === 'inside' ? centreInside : verticalTextCentre(lo, hi, textW, textPlace, arrowsInside)), text: req.text, sizePt: DIM_TEXT_PT, anchor: 'middle', font: 'mono', rotate: 90 };
+      { type: 'label', at: pt(rowAt - TEXT_GAP_MM, vCentre), text: req.text, sizePt: DIM_TEXT_PT, anchor: 'middle', font: 'mono', rotate: 90 };
   out.push(label);
 
   const lineLo = arrowsInside ? lo : lo - ARROW_MM - 2;
   const lineHi = arrowsInside ? hi : hi + ARROW_MM + 2;
   if (horizontal) return { primitives: out, lo: Math.min(lineLo, textLo), hi: Math.max(lineHi, textLo + textW) };
-  const centre = textPlace === 'inside' ? centreInside : verticalTextCentre(lo, hi, textW, textPlace, arrowsInside);
-  return { primitives: out, lo: Math.min(lineLo, centre - textW / 2), hi: Math.max(lineHi, centre + textW / 2) };
+  return { primitives: out, lo: Math.min(lineLo, vCentre - textW / 2), hi: Math.max(lineHi, vCentre + textW / 2) };
 }
 
 function verticalTextCentre(lo: number, hi: number, textW: number, place: 'inside' | 'after' | 'before', arrowsInside: boolean): number {
@@ -142,6 +151,27 @@ function textClearOf(c: PlacedDim, stations: readonly number[]): boolean {
   const r = primitiveRect(label);
   const [a, b] = label.type === 'label' && label.rotate === 90 ? [r.y, r.y + r.h] : [r.x, r.x + r.w];
   return stations.every((x) => x <= a - STATION_CLEAR_MM || x >= b + STATION_CLEAR_MM);
+}
+
+/** Furthest a text beside its line slides out along its row to clear extension lines, mm. */
+const SLIDE_MAX_MM = 30;
+
+/**
+ * How far the text of `c` (set beside its line at `place`) must slide outward along its row to
+ * cross none of `stations`: 0 when it crosses none, null when no slide up to {@link SLIDE_MAX_MM} will do.
+ */
+function slideClear(c: PlacedDim, horizontal: boolean, place: 'after' | 'before', stations: readonly number[]): number | null {
+  const label = c.primitives.find((p) => p.type === 'label');
+  if (!label) return 0;
+  const r = primitiveRect(label);
+  const [a, b] = horizontal ? [r.x, r.x + r.w] : [r.y, r.y + r.h];
+  // Outward: along +x after the line (horizontal), along −y after it (vertical: "after" is above).
+  const dir = horizontal === (place === 'after') ? 1 : -1;
+  for (let slide = 0; slide <= SLIDE_MAX_MM; slide += 0.25) {
+    const [lo, hi] = [a + dir * slide, b + dir * slide];
+    if (stations.every((x) => x <= lo - STATION_CLEAR_MM || x >= hi + STATION_CLEAR_MM)) return slide;
+  }
+  return null;
 }
 
 interface Row {
@@ -203,8 +233,16 @@ export function layoutView(model: ModelView, scale: number, scaleLabel: string):
     let placed: PlacedDim | null = null;
     for (let r = tierStart[side]; placed === null; r++) {
       const rowAt = rowPosition(geometry, side, r);
+      // Beside the line where it is clear of other extension lines; else slid out along the row
+      // past them (after, then before).
+      const candidates = places.map((place) => drawDimension(req, p0, p1, side, rowAt, place, place === 'inside' ? insideCentre : undefined));
       for (const place of places) {
-        const candidate = drawDimension(req, p0, p1, side, rowAt, place, place === 'inside' ? insideCentre : undefined);
+        if (place === 'inside') continue;
+        const slide = slideClear(drawDimension(req, p0, p1, side, rowAt, place), horizontal, place, foreign);
+        if (slide) candidates.push(drawDimension(req, p0, p1, side, rowAt, place, undefined, slide));
+      }
+      for (const candidate of candidates) {
+        const place = places.length === 1 ? 'inside' : 'beside';
         // A text set beside its line must not sit across another's extension line either; after a
         // few rows that cannot be helped, the first free place is taken.
         const across = place === 'inside' || r - tierStart[side] >= STATION_ROWS_TRIED || textClearOf(candidate, foreign);

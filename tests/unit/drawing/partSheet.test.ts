@@ -4,6 +4,7 @@ import { lengthText } from '../../../shared/drawing/lengthText.ts';
 import { partLetters } from '../../../shared/drawing/partLetters.ts';
 import { cutRows, partSheet } from '../../../shared/drawing/partSheet.ts';
 import { rectsOverlap, rectUnion } from '../../../shared/drawing/rects.ts';
+import { DIM_TEXT_PT } from '../../../shared/drawing/textMetrics.ts';
 import type { Primitive, Rect, Sheet } from '../../../shared/drawing/types.ts';
 import type { Part } from '../../../shared/engine/types.ts';
 import { buildPiece, defaultSpec } from '../../../shared/engine/index.ts';
@@ -31,7 +32,28 @@ function markBoxes(primitives: readonly Primitive[]): { text: string; box: Rect 
   return out;
 }
 
+/** How far a line must run into a text's box to count as crossing it, mm: touching its edge is not. */
+const CROSS_MM = 0.15;
+
 describe('partSheet', () => {
+  it.each(KINDS)('lets no extension line (or any thin line) run through a dimension text on the default %s', (kind) => {
+    let texts = 0;
+    for (const { partId, sheet } of built[kind]) {
+      for (const view of sheet.views) {
+        const lines = view.primitives.filter((p) => p.type === 'segment' && p.kind === 'thin').map(primitiveRect);
+        for (const label of view.primitives) {
+          if (label.type !== 'label' || label.font !== 'mono' || label.sizePt !== DIM_TEXT_PT) continue;
+          texts++;
+          const box = primitiveRect(label);
+          const inner = { x: box.x + CROSS_MM, y: box.y + CROSS_MM, w: box.w - 2 * CROSS_MM, h: box.h - 2 * CROSS_MM };
+          const crossing = lines.filter((l) => l.x < inner.x + inner.w && l.x + l.w > inner.x && l.y < inner.y + inner.h && l.y + l.h > inner.y);
+          expect(crossing, `${partId} ${view.id}: "${label.text}" crossed`).toEqual([]);
+        }
+      }
+    }
+    expect(texts).toBeGreaterThan(0);
+  });
+
   it.each(KINDS)('keeps every detail mark and its number clear of every other on the default %s', (kind) => {
     let marks = 0;
     for (const { partId, sheet } of built[kind]) {
