@@ -241,11 +241,11 @@ export function layoutView(model: ModelView, scale: number, scaleLabel: string):
         const slide = slideClear(drawDimension(req, p0, p1, side, rowAt, place), horizontal, place, foreign);
         if (slide) candidates.push(drawDimension(req, p0, p1, side, rowAt, place, undefined, slide));
       }
+      const inside = places[0] === 'inside';
       for (const candidate of candidates) {
-        const place = places.length === 1 ? 'inside' : 'beside';
         // A text set beside its line must not sit across another's extension line either; after a
         // few rows that cannot be helped, the first free place is taken.
-        const across = place === 'inside' || r - tierStart[side] >= STATION_ROWS_TRIED || textClearOf(candidate, foreign);
+        const across = inside || r - tierStart[side] >= STATION_ROWS_TRIED || textClearOf(candidate, foreign);
         if (fits(rows[side][r], candidate.lo, candidate.hi) && textFree(candidate) && across) {
           placed = candidate;
           const label = candidate.primitives.find((p) => p.type === 'label');

@@ -42,7 +42,7 @@ export function finishingBlocks(result: PieceResult): FlowBlock[] {
       title: 'Finishing schedule',
       head: ['Stage', 'What', 'Grit', 'Dry before next'],
       rows: [
-        ['1', 'Sand every part before glue-up; ease sharp edges', '120 → 150 → 180', '—'],
+        ['1', 'Sand every part before glue-up; ease sharp edges', '120, then 150, then 180', '—'],
         ['2', 'Wipe with a damp cloth to raise the grain; sand lightly when dry', '220', '1 h'],
         ['3', 'Coat 1 of oil-based varnish, thinned about 1:1 as a sealer', '—', '24 h'],
         ['4', 'Scuff-sand; remove dust', '320', '—'],

@@ -46,7 +46,7 @@ export function joineryBlock(result: PieceResult, units: DrawingUnits): TableBlo
   const rows: string[][] = result.derived.joinery.length
     ? result.derived.joinery.map((j) => [
         j.type,
-        `${name(j.parts[0])} → ${name(j.parts[1])}`,
+        `${name(j.parts[0])} into ${name(j.parts[1])}`,
         String(j.count),
         j.features.map((f) => `${name(f.partId)}: ${cutText(f.partId, f.featureId) ?? f.summary}`).join('\n'),
         j.setUps.map((s) => `${s.tool}: ${s.settings.map((x) => `${x.name} ${lengthText(x.valueMm, units)}`).join(', ')}${s.note ? ` (${s.note})` : ''}`).join('\n'),
@@ -55,7 +55,7 @@ export function joineryBlock(result: PieceResult, units: DrawingUnits): TableBlo
       ])
     : result.joints.map((j) => [
         j.type,
-        `${name(j.members[0].partId)} → ${name(j.members[1].partId)}`,
+        `${name(j.members[0].partId)} into ${name(j.members[1].partId)}`,
         String(j.count),
         j.members.map((m) => `${name(m.partId)}: ${m.featureIds.join(', ')}`).join('\n'),
         j.note,
@@ -65,7 +65,7 @@ export function joineryBlock(result: PieceResult, units: DrawingUnits): TableBlo
   return {
     type: 'table',
     title: 'Joinery schedule',
-    head: ['Joint', 'Parts (into)', 'Count', 'Cuts', 'Set-ups and notes', 'Clearance', 'Glue'],
+    head: ['Joint', 'Parts', 'Count', 'Cuts', 'Set-ups and notes', 'Clearance', 'Glue'],
     rows,
     numericColumns: [2, 5],
   };

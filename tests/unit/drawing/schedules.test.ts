@@ -18,4 +18,14 @@ describe('joineryBlock', () => {
       }
     });
   });
+
+  it('names the parts of each joint in words, the first into the second, with no arrow a PDF font cannot draw', () => {
+    const result = buildPiece(defaultSpec('chest'));
+    const block = joineryBlock(result, 'in');
+    const names = new Map(result.parts.map((p) => [p.id, p.name]));
+    result.derived.joinery.forEach((j, i) => {
+      expect(block.rows[i]![1]).toBe(`${names.get(j.parts[0])} into ${names.get(j.parts[1])}`);
+    });
+    expect(block.rows.flat().some((cell) => /→|->/.test(cell))).toBe(false);
+  });
 });

@@ -107,6 +107,11 @@ describe('renderPlanSetPdf', () => {
     expect(pages.filter((p) => /Part [A-Z]+: /.test(p)).length).toBe(partLetters(result).size);
   });
 
+  it('writes no arrow as `->` (the fonts have no →; joints read "into")', () => {
+    expect(pages.filter((p) => p.includes('->'))).toEqual([]);
+    expect(pages.some((p) => / into Leg/.test(p))).toBe(true);
+  });
+
   it('renders no blank page', () => {
     execFileSync('pdftoppm', ['-gray', '-r', '25', pdfPath, join(dir, 'page')]);
     const files = readdirSync(dir).filter((f) => f.startsWith('page') && f.endsWith('.pgm')).sort();
