@@ -14,6 +14,7 @@ import { DEFAULT_BOARD_SIZES } from '../layout/boardInput.ts';
 import { DEFAULT_KERF_MM, DEFAULT_TRIM_MM, STANDARD_SHEET } from '../layout/sheetInput.ts';
 import type { SheetStock } from '../layout/sheetTypes.ts';
 import { stockProblem } from '../schemas/stock.ts';
+import { formatLength } from '../units/format.ts';
 import { MM_PER_INCH } from '../units/length.ts';
 import type { TakeoffOptions } from './takeoff.ts';
 
@@ -97,6 +98,19 @@ export const stockBoardId = (index: number) => `stock-${index + 1}`;
 
 const inches = (mm: number) => Number((mm / MM_PER_INCH).toFixed(3));
 
+// Settings hold millimetres only, so a size is named in the unit it reads whole in: whole
+// inches (48 × 96 in), else whole millimetres (a metric 1220 × 2440 mm sheet), else inches to 1/16.
+const SIZE_TOLERANCE = 1e-6;
+const whole = (n: number) => Math.abs(n - Math.round(n)) < SIZE_TOLERANCE;
+
+/** Names a sheet or offcut `aMm` × `bMm` (mm) in the unit its sizes read whole in. */
+export function sheetSizeName(aMm: number, bMm: number): string {
+  if (whole(aMm / MM_PER_INCH) && whole(bMm / MM_PER_INCH)) return `${Math.round(aMm / MM_PER_INCH)} × ${Math.round(bMm / MM_PER_INCH)} in`;
+  if (whole(aMm) && whole(bMm)) return `${Math.round(aMm)} × ${Math.round(bMm)} mm`;
+  const sixteenths = (mm: number) => formatLength(mm, { unit: 'in', precision: 16 }).replace(/"$/, '');
+  return `${sixteenths(aMm)} × ${sixteenths(bMm)} in`;
+}
+
 /** The region the board layout cuts around for a marked defect, mm from the board's end and edge. */
 export function boardDefectFor(defect: StockDefect): BoardDefect {
   return {
@@ -119,7 +133,7 @@ export function takeoffOptionsFor(settings: StockSettings, effort: LayoutEffort 
   if (!attempts) throw new InputError('effort', `must be quick, standard or thorough (got ${String(effort)})`, 'quick, standard or thorough');
   const sale: SheetStock = {
     id: 'sheet-for-sale',
-    name: `Sheet ${inches(Math.min(settings.sheetLengthMm, settings.sheetWidthMm))} × ${inches(Math.max(settings.sheetLengthMm, settings.sheetWidthMm))} in`,
+    name: `Sheet ${sheetSizeName(Math.min(settings.sheetLengthMm, settings.sheetWidthMm), Math.max(settings.sheetLengthMm, settings.sheetWidthMm))}`,
     lengthMm: settings.sheetLengthMm,
     widthMm: settings.sheetWidthMm,
     count: null,
@@ -159,7 +173,7 @@ export function takeoffOptionsFor(settings: StockSettings, effort: LayoutEffort 
     sheetStock: (sheetId) => [
       ...settings.offcuts
         .filter((o) => o.sheetId === sheetId)
-        .map((o, i) => ({ id: `offcut-${i + 1}`, name: `Offcut ${inches(o.widthMm)} × ${inches(o.lengthMm)} in`, lengthMm: o.lengthMm, widthMm: o.widthMm, count: o.count, offcut: true })),
+        .map((o, i) => ({ id: `offcut-${i + 1}`, name: `Offcut ${sheetSizeName(o.widthMm, o.lengthMm)}`, lengthMm: o.lengthMm, widthMm: o.widthMm, count: o.count, offcut: true })),
       sale,
     ],
     boardStock: (speciesId, quarters) => [

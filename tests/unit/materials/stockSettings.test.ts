@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { buildPiece, type PieceSpec } from '../../../shared/engine/index.ts';
 import { isInputError } from '../../../shared/errors.ts';
 import { rectsOverlap } from '../../../shared/layout/rect.ts';
-import { DEFAULT_STOCK_SETTINGS, boardDefectFor, stockBoardId, takeoffOptionsFor, type StockSettings } from '../../../shared/materials/stockSettings.ts';
+import { DEFAULT_STOCK_SETTINGS, boardDefectFor, sheetSizeName, stockBoardId, takeoffOptionsFor, type StockSettings } from '../../../shared/materials/stockSettings.ts';
 import { materialsTakeoff } from '../../../shared/materials/takeoff.ts';
 
 const IN = 25.4;
@@ -69,5 +69,29 @@ describe('takeoffOptionsFor', () => {
 
   it('refuses an effort it does not know', () => {
     expect(() => takeoffOptionsFor(DEFAULT_STOCK_SETTINGS, 'forever' as 'quick')).toThrow(/quick, standard or thorough/);
+  });
+});
+
+describe('sheetSizeName', () => {
+  const saleName = (sheetLengthMm: number, sheetWidthMm: number) =>
+    takeoffOptionsFor({ ...DEFAULT_STOCK_SETTINGS, sheetLengthMm, sheetWidthMm }).sheetStock!('hardwood-plywood-3/4').find((s) => !s.offcut)!.name;
+
+  it('names an inch sheet in whole inches, narrow side first', () => {
+    expect(saleName(96 * IN, 48 * IN)).toBe('Sheet 48 × 96 in');
+  });
+
+  it('names a metric sheet in millimetres, not in inches with decimals', () => {
+    expect(saleName(2440, 1220)).toBe('Sheet 1220 × 2440 mm');
+  });
+
+  it('names any other size in inches to the nearest 1/16', () => {
+    expect(sheetSizeName(24.5 * IN, 30.0625 * IN)).toBe('24 1/2 × 30 1/16 in');
+    // 1225.3 mm is 48.240 in, nearest 1/16 is 48 1/4.
+    expect(sheetSizeName(1225.3, 2438.4)).toBe('48 1/4 × 96 in');
+  });
+
+  it('names offcuts the same way', () => {
+    const offcuts = takeoffOptionsFor({ ...DEFAULT_STOCK_SETTINGS, offcuts: [{ sheetId: 'mdf-3/4', lengthMm: 900, widthMm: 600, count: 1 }] }).sheetStock!('mdf-3/4');
+    expect(offcuts[0]!.name).toBe('Offcut 600 × 900 mm');
   });
 });
