@@ -102,6 +102,8 @@ describe('the Export menu', () => {
     await page.getByRole('radio', { name: 'Landscape' }).click();
     await page.getByRole('dialog', { name: 'Export' }).getByRole('radio', { name: 'inch' }).click();
     await page.getByRole('dialog', { name: 'Export' }).getByRole('combobox', { name: 'Sheet' }).selectOption('letter');
+    // The menu names the stock the cutting diagrams use once it has read the workshop's.
+    await page.getByRole('dialog', { name: 'Export' }).getByText(/Cutting diagrams use the workshop's stock, as on the Materials page \(\d+ boards on hand first\)/).waitFor();
     // Record every state of the progress bar while the export runs.
     await page.evaluate(() => {
       const seen: string[] = [];
@@ -146,10 +148,20 @@ describe('the Export menu', () => {
   });
 
   it('costs the materials from the workshop\'s price list (the demo workshop has one)', () => {
-    const materials = pdfText.split('\f').find((p) => p.includes('Shopping list'));
-    expect(materials, 'no materials page').toBeDefined();
-    expect(materials).toMatch(/Cost \(USD\)/);
-    expect(materials).toMatch(/Total\s+\$?[\d,]+\.\d\d/);
+    // The materials pages: the cost table, then the priced shopping list (on a continued page when the first is full).
+    const cost = pdfText.split('\f').find((p) => p.includes('Cost (USD)'));
+    expect(cost, 'no cost table').toBeDefined();
+    expect(cost).toMatch(/Total\s+\$?[\d,]+\.\d\d/);
+    expect(pdfText).toContain('Shopping list (USD)');
+  });
+
+  it('lays the materials out on the workshop\'s stock: its white oak boards on hand are cut first', () => {
+    const pages = pdfText.split('\f');
+    const words = (text: string) => text.split(/\s+/).map((w) => w.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')).join('\\s+');
+    expect(pdfText).toMatch(new RegExp(words(`Laid out on the stock of ${DEMO_WORKSHOP}:`)));
+    const oak = pages.find((p) => p.includes('Cutting diagrams: White oak 4/4') && /Board \d+ of/.test(p));
+    expect(oak, 'no white oak 4/4 diagrams').toBeDefined();
+    expect(oak).toMatch(/Board 1 of \d+ \(in stock\)/);
   });
 
   it('embeds JetBrains Mono', () => {
