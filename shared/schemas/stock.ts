@@ -30,7 +30,13 @@ export const MAX_OFFCUT_COUNT = 100;
 // Sums of lengths typed in fractions of an inch carry float noise far below a saw's accuracy.
 const FIT_TOLERANCE_MM = 1e-6;
 
-const number = { error: 'must be a number (millimetres)' };
+/** What a required field left out reports, naming no type: the form has simply not sent it. */
+export const MISSING_MESSAGE = 'is missing';
+
+/** A type error that says `is missing` when the field was left out, and `message` when it holds the wrong kind of value. */
+const orMissing = (message: string) => ({ error: (issue: { input?: unknown }) => (issue.input === undefined ? MISSING_MESSAGE : message) });
+
+const number = orMissing('must be a number (millimetres)');
 
 const size = (max: number) =>
   z.number(number).gt(0, { message: 'must be more than 0 mm' }).max(max, { message: `must be at most ${max} mm` });
@@ -38,7 +44,7 @@ const offset = (max: number) =>
   z.number(number).min(0, { message: 'must be 0 mm or more' }).max(max, { message: `must be at most ${max} mm` });
 
 const defectSchema = z.strictObject({
-  kind: z.enum(['knot', 'check', 'other'], { error: 'must be knot, check or other' }),
+  kind: z.enum(['knot', 'check', 'other'], orMissing('must be knot, check or other')),
   fromEndMm: offset(MAX_STOCK_LENGTH_MM),
   fromEdgeMm: offset(MAX_BOARD_WIDTH_MM),
   lengthMm: size(MAX_STOCK_LENGTH_MM),
@@ -52,22 +58,22 @@ const boardInStockSchema = z.strictObject({
     .max(MAX_LABEL_CHARS, { message: `must be at most ${MAX_LABEL_CHARS} characters` })
     .refine((text) => !text.includes('\u0000'), { message: 'must not contain NUL characters' })
     .optional(),
-  speciesId: z.enum(SPECIES_IDS as [string, ...string[]], { error: 'must be a species of the wood library' }),
+  speciesId: z.enum(SPECIES_IDS as [string, ...string[]], orMissing('must be a species of the wood library')),
   quarters: z.number(number).int({ message: 'must be a whole number of quarters (4 for 4/4)' }).min(1, { message: 'must be at least 1/4' }).max(64, { message: 'must be at most 64/4' }),
   lengthMm: size(MAX_STOCK_LENGTH_MM),
   widthMm: size(MAX_BOARD_WIDTH_MM),
-  defects: z.array(defectSchema).max(MAX_DEFECTS_PER_BOARD, { message: `must list at most ${MAX_DEFECTS_PER_BOARD} defects` }),
+  defects: z.array(defectSchema, orMissing('must be a list of defects')).max(MAX_DEFECTS_PER_BOARD, { message: `must list at most ${MAX_DEFECTS_PER_BOARD} defects` }),
 });
 
 const offcutSchema = z.strictObject({
-  sheetId: z.enum(SHEET_GOOD_IDS as [string, ...string[]], { error: 'must be a sheet good of the wood library' }),
+  sheetId: z.enum(SHEET_GOOD_IDS as [string, ...string[]], orMissing('must be a sheet good of the wood library')),
   lengthMm: size(MAX_STOCK_LENGTH_MM),
   widthMm: size(MAX_STOCK_LENGTH_MM),
   count: z.number(number).int({ message: 'must be a whole number' }).min(1, { message: 'must be at least 1' }).max(MAX_OFFCUT_COUNT, { message: `must be at most ${MAX_OFFCUT_COUNT}` }),
 });
 
 const sizesForSale = (max: number) =>
-  z.array(size(max)).min(1, { message: 'needs at least one size for sale' }).max(MAX_SIZES_FOR_SALE, { message: `must list at most ${MAX_SIZES_FOR_SALE} sizes` });
+  z.array(size(max), orMissing('must be a list of sizes')).min(1, { message: 'needs at least one size for sale' }).max(MAX_SIZES_FOR_SALE, { message: `must list at most ${MAX_SIZES_FOR_SALE} sizes` });
 
 /** Millimetres as a message shows them: to a tenth. */
 const mm = (value: number) => `${Number(value.toFixed(1))} mm`;
@@ -109,10 +115,10 @@ export const stockSettingsSchema = z
   .strictObject({
     sheetLengthMm: size(MAX_STOCK_LENGTH_MM),
     sheetWidthMm: size(MAX_STOCK_LENGTH_MM),
-    offcuts: z.array(offcutSchema).max(MAX_OFFCUTS, { message: `must list at most ${MAX_OFFCUTS} offcuts` }),
+    offcuts: z.array(offcutSchema, orMissing('must be a list of offcuts')).max(MAX_OFFCUTS, { message: `must list at most ${MAX_OFFCUTS} offcuts` }),
     boardLengthsMm: sizesForSale(MAX_STOCK_LENGTH_MM),
     boardWidthsMm: sizesForSale(MAX_BOARD_WIDTH_MM),
-    boardsInStock: z.array(boardInStockSchema).max(MAX_BOARDS_IN_STOCK, { message: `must list at most ${MAX_BOARDS_IN_STOCK} boards` }),
+    boardsInStock: z.array(boardInStockSchema, orMissing('must be a list of boards')).max(MAX_BOARDS_IN_STOCK, { message: `must list at most ${MAX_BOARDS_IN_STOCK} boards` }),
     kerfMm: offset(MAX_KERF_MM),
     trimMm: offset(MAX_TRIM_MM),
   })
@@ -166,6 +172,7 @@ const fieldOf = (path: readonly PropertyKey[]) =>
   path.reduce<string>((text, key) => (typeof key === 'number' ? `${text}[${key}]` : text === '' ? String(key) : `${text}.${String(key)}`), '');
 
 function limitOf(issue: z.core.$ZodIssue): string {
+  if (issue.message === MISSING_MESSAGE) return 'required';
   if (issue.code === 'too_big') return `at most ${String(issue.maximum)}`;
   if (issue.code === 'too_small') return issue.inclusive === false ? `more than ${String(issue.minimum)}` : `at least ${String(issue.minimum)}`;
   if (issue.code === 'custom' && typeof issue.params?.limit === 'string') return issue.params.limit;

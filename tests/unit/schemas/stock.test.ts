@@ -73,6 +73,26 @@ describe('stockSettingsSchema', () => {
   });
 });
 
+describe('stockProblems of a missing field', () => {
+  it('says a left-out length is missing, naming the field, and keeps the type message for a wrong kind of value', () => {
+    const { kerfMm: _kerf, ...noKerf } = DEFAULT_STOCK_SETTINGS;
+    expect(stockProblem(noKerf)).toEqual({ field: 'kerfMm', path: ['kerfMm'], message: 'is missing', limit: 'required' });
+    expect(stockProblem({ ...DEFAULT_STOCK_SETTINGS, kerfMm: '3' })?.message).toBe('must be a number (millimetres)');
+  });
+
+  it('says a left-out list, species or size inside a board on hand is missing, naming its row', () => {
+    const { offcuts: _offcuts, ...noOffcuts } = DEFAULT_STOCK_SETTINGS;
+    expect(stockProblem(noOffcuts)).toMatchObject({ field: 'offcuts', message: 'is missing' });
+    const board = { quarters: 4, lengthMm: 72 * IN, defects: [{ kind: 'knot', fromEndMm: 0, fromEdgeMm: 0, widthMm: IN }] };
+    const problems = stockProblems({ ...DEFAULT_STOCK_SETTINGS, boardsInStock: [board] }).map((p) => [p.field, p.message]);
+    expect(problems).toEqual([
+      ['boardsInStock[0].speciesId', 'is missing'],
+      ['boardsInStock[0].widthMm', 'is missing'],
+      ['boardsInStock[0].defects[0].lengthMm', 'is missing'],
+    ]);
+  });
+});
+
 describe('stockBody', () => {
   it('takes the stock with the version it was read at, or null for a workshop that has saved none', () => {
     expect(stockBody.safeParse({ version: '2026-11-30T16:20:00.123456Z', stock: DEFAULT_STOCK_SETTINGS }).success).toBe(true);
