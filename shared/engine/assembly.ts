@@ -57,6 +57,8 @@ export interface Assembled {
   joints: Joint[];
   /** Part id of each draft. */
   partIdOf: Map<PartDraft, string>;
+  /** Placement instance of each draft among its part's instances. */
+  instanceOf: Map<PartDraft, number>;
 }
 
 const round6 = (n: number): number => Math.round(n * 1e6) / 1e6;
@@ -304,6 +306,7 @@ export function assemble(drafts: readonly PartDraft[], joints: readonly JointDra
   const parts: Part[] = [];
   const placements: Placement[] = [];
   const partIdOf = new Map<PartDraft, string>();
+  const instanceOf = new Map<PartDraft, number>();
   const used = new Map<string, number>();
   for (const { drafts: same, features } of classes) {
     const first = same[0]!;
@@ -329,6 +332,7 @@ export function assemble(drafts: readonly PartDraft[], joints: readonly JointDra
     parts.push(whole as Part);
     same.forEach((draft, instance) => {
       partIdOf.set(draft, id);
+      instanceOf.set(draft, instance);
       placements.push(placeInto(id, instance, draft.label, draft.size, chosen.get(draft)!.axes, draft.world, draft.explodeMm));
     });
   }
@@ -370,5 +374,5 @@ export function assemble(drafts: readonly PartDraft[], joints: readonly JointDra
       count, clearanceMm: first.clearanceMm, glued: first.glued, floating: first.floating, note: first.note,
     };
   });
-  return { parts, placements, joints: jointList, partIdOf };
+  return { parts, placements, joints: jointList, partIdOf, instanceOf };
 }

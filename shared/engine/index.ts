@@ -57,6 +57,7 @@ export function buildPiece(spec: PieceSpec): PieceResult {
     checks: Object.freeze(built.checks),
     bboxMm: built.bboxMm,
     bboxMinMm: built.bboxMinMm,
+    openings: Object.freeze(built.openings),
     derived: deriveOutputs(checked.kind, built.parts, built.joints),
   });
   last = { spec, result };

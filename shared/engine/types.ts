@@ -345,6 +345,60 @@ export interface Placement {
   explodeMm: Vec3;
 }
 
+/** One placed instance of a part: its id and the `instance` of its placement. */
+export interface PartInstanceRef {
+  partId: string;
+  instance: number;
+}
+
+/** A line in the piece's world frame: a point on it (mm) and a unit direction. */
+export interface Axis3 {
+  origin: Vec3;
+  direction: Vec3;
+}
+
+/** A lid that swings up and back about its hinge line. */
+export interface LidOpening {
+  kind: 'lid';
+  /** The lid and what is fixed to it (battens). */
+  parts: readonly PartInstanceRef[];
+  /** The hinge pin line, along X; opening turns the lid about it, front rising. */
+  hingeAxis: Axis3;
+  /** How far the lid opens to its stop, degrees from closed. */
+  openAngleDeg: number;
+}
+
+/** A door that swings out about a vertical hinge line at its front face. */
+export interface DoorOpening {
+  kind: 'door';
+  /** `door-1`, `door-2` ... from the left. */
+  id: string;
+  /** Every part of the leaf (stiles, rails, panel, or the slab). */
+  parts: readonly PartInstanceRef[];
+  /** Hinge side as you face the piece. */
+  side: 'left' | 'right';
+  /** The hinge line: the leaf's outer edge at its front face, along +Z. */
+  hingeAxis: Axis3;
+  /** How far the door swings open, degrees from closed. */
+  swingDeg: number;
+}
+
+/** A drawer that slides straight out of the front. */
+export interface DrawerOpening {
+  kind: 'drawer';
+  /** `drawer-<row>-<column>`, rows counted from the top. */
+  id: string;
+  /** The drawer front and every part of its box. */
+  parts: readonly PartInstanceRef[];
+  /** How far it comes out at full extension (or off its runners), mm: the box depth. */
+  travelMm: number;
+  /** Unit direction it pulls out: toward the viewer, −Y. */
+  direction: Vec3;
+}
+
+/** What opens on a piece and how; lengths mm, angles degrees, in the piece's world frame. */
+export type Opening = LidOpening | DoorOpening | DrawerOpening;
+
 /** How serious a check is. */
 export type Severity = 'error' | 'warning' | 'caution' | 'info';
 
@@ -454,5 +508,7 @@ export interface PieceResult {
   bboxMm: Vec3;
   /** World position of the bounding box's low corner (negative where a lid overhangs). */
   bboxMinMm: Vec3;
+  /** The lid, doors and drawers: how each opens, closed positions as placed. */
+  openings: readonly Opening[];
   derived: DerivedOutputs;
 }

@@ -1,35 +1,30 @@
 /**
  * What room fit needs to know about a piece, read from the engine's result: the world box of
- * every part instance, what opens and how (a lid about its hinge line, doors about their hinge
- * edges, drawers straight out), and which subassemblies come apart for carrying.
+ * every part instance, what opens and how (the result's `openings`: a lid about its hinge line,
+ * doors about their hinge edges, drawers straight out), and which subassemblies come apart for
+ * carrying.
  *
- * This is the one adapter between the engine and room fit. Facts the result does not carry yet
- * are derived here and said so in `assumptions`:
- *  - the lid's hinge line: taken at the back face of the case (the largest Y of the parts that
- *    are not the lid) and the underside of the lid, running along X;
- *  - the lid's opening angle: the spec's `lidOpenAngle` parameter (degrees) when present, else
- *    {@link DEFAULT_LID_OPEN_ANGLE_DEG};
- *  - doors: each group of touching `door`, `door-frame` and `door-panel` instances is one leaf,
- *    hinged on the side away from the piece's middle (left when it is at or left of the middle,
- *    the engine's own rule for laying out leaves), about its edge on its front face;
- *  - drawers: each group of touching drawer parts is one drawer, on full-extension slides: it
- *    travels the length of its sides.
+ * This is the one adapter between the engine and room fit. The one fact the result gives without
+ * a parameter behind it is said so in `assumptions`: the lid's opening angle, the engine's usual
+ * stop at {@link DEFAULT_LID_OPEN_ANGLE_DEG} (chests have no lid-stay parameter yet).
  */
 import { boxAt, boxUnion, boxVolume } from '../engine/geometry/box.ts';
 import { worldSize } from '../engine/geometry/placement.ts';
-import type { Box3, PieceKind, PieceResult } from '../engine/types.ts';
+import { LID_OPEN_ANGLE_DEG } from '../engine/pieces/openings.ts';
+import type { Box3, PartInstanceRef, PieceKind, PieceResult } from '../engine/types.ts';
 import { assert } from '../assert.ts';
-import { touchingGroups } from './partClusters.ts';
 
 /**
- * Lid opening angle when the design does not give one, degrees from closed: upright, where a
- * lid-support hinge or stay commonly stops it (common practice, no published source).
+ * The lid opening angle the engine gives when the design has no other, degrees from closed:
+ * upright, where a lid-support hinge or stay commonly stops it (common practice, no published source).
  */
-export const DEFAULT_LID_OPEN_ANGLE_DEG = 90;
+export const DEFAULT_LID_OPEN_ANGLE_DEG = LID_OPEN_ANGLE_DEG;
 
 /** One placed part instance, its world box in the piece's frame (mm). */
 export interface EnvelopePart {
   partId: string;
+  /** The placement's instance among the part's. */
+  instance: number;
   label: string;
   role: string;
   box: Box3;
@@ -87,50 +82,52 @@ export interface PieceEnvelope {
   drawers: readonly DrawerOpening[];
   /** The pieces it comes apart into for carrying, largest first; one entry when it does not. */
   subassemblies: readonly Subassembly[];
-  /** What was assumed because the result does not say it, in words. */
+  /** What was assumed because the design does not say it, in words. */
   assumptions: readonly string[];
 }
-
-const LID_ROLES: ReadonlySet<string> = new Set(['lid', 'batten']);
-const DOOR_ROLES: ReadonlySet<string> = new Set(['door', 'door-frame', 'door-panel']);
-const DRAWER_ROLES: ReadonlySet<string> = new Set(['drawer-front', 'drawer-side', 'drawer-end', 'drawer-bottom']);
-
-/** Degrees a door of the piece opens to when the result does not say: room fit checks 90°. */
-const DOOR_OPEN_ANGLE_DEG = 90;
 
 /** Reads the envelope of an engine result. */
 export function envelopeFromResult(result: PieceResult): PieceEnvelope {
   const parts = placedParts(result);
   assert(parts.length > 0, 'a piece result has at least one placed part');
-  const lidParts = parts.filter((p) => LID_ROLES.has(p.role));
-  const caseParts = parts.filter((p) => !LID_ROLES.has(p.role) && !DOOR_ROLES.has(p.role) && !DRAWER_ROLES.has(p.role));
+  const byInstance = new Map(parts.map((p) => [instanceKey(p.partId, p.instance), p]));
+  // In placement order, as the case's own parts are.
+  const order = new Map(parts.map((p, i) => [p, i]));
+  const partsOf = (refs: readonly PartInstanceRef[]): EnvelopePart[] => refs.map((ref) => {
+    const part = byInstance.get(instanceKey(ref.partId, ref.instance));
+    assert(part !== undefined, `an opening names a placed part instance (${ref.partId} #${ref.instance})`);
+    return part;
+  }).sort((a, b) => order.get(a)! - order.get(b)!);
+  const opening = new Set(result.openings.flatMap((o) => o.parts.map((ref) => instanceKey(ref.partId, ref.instance))));
+  const caseParts = parts.filter((p) => !opening.has(instanceKey(p.partId, p.instance)));
   const box = boxUnion(parts.map((p) => p.box));
   const assumptions: string[] = [];
 
   let lid: LidOpening | null = null;
-  if (lidParts.length > 0 && caseParts.length > 0) {
-    const lidBoards = lidParts.filter((p) => p.role === 'lid');
-    const hingeZMm = Math.min(...(lidBoards.length > 0 ? lidBoards : lidParts).map((p) => p.box.min[2]));
-    const hingeYMm = Math.max(...caseParts.map((p) => p.box.max[1]));
-    const angle = result.spec.params['lidOpenAngle'];
-    const openAngleDeg = typeof angle === 'number' && angle > 0 && angle <= 180 ? angle : DEFAULT_LID_OPEN_ANGLE_DEG;
-    lid = { parts: lidParts, hingeYMm, hingeZMm, openAngleDeg };
-    assumptions.push(`lid hinge line taken at the back of the case (Y ${round(hingeYMm)} mm) and the underside of the lid (Z ${round(hingeZMm)} mm)`);
-    if (openAngleDeg === DEFAULT_LID_OPEN_ANGLE_DEG && typeof angle !== 'number') {
+  for (const o of result.openings) {
+    if (o.kind !== 'lid') continue;
+    lid = { parts: partsOf(o.parts), hingeYMm: o.hingeAxis.origin[1], hingeZMm: o.hingeAxis.origin[2], openAngleDeg: o.openAngleDeg };
+    if (o.openAngleDeg === DEFAULT_LID_OPEN_ANGLE_DEG) {
       assumptions.push(`lid opening angle not given; ${DEFAULT_LID_OPEN_ANGLE_DEG}° assumed (common practice, no published source)`);
     }
   }
 
-  const doors = doorsOf(parts, box);
-  const drawers = drawersOf(parts);
-  if (doors.length > 0) assumptions.push('doors hinged on the side away from the middle of the piece, about their outer front edge');
-  if (drawers.length > 0) assumptions.push('drawers on full-extension slides: each travels the length of its sides');
+  const doors: DoorOpening[] = result.openings
+    .flatMap((o) => (o.kind === 'door' ? [{ o, leaf: partsOf(o.parts) }] : []))
+    .map((d) => ({ ...d, box: boxUnion(d.leaf.map((p) => p.box)) }))
+    .sort((a, b) => a.box.min[0] - b.box.min[0] || b.box.max[2] - a.box.max[2])
+    .map(({ o, leaf }, i) => ({ id: `door-${i + 1}`, parts: leaf, hinge: o.side, hingeXMm: o.hingeAxis.origin[0], hingeYMm: o.hingeAxis.origin[1], openAngleDeg: o.swingDeg }));
+  const drawers: DrawerOpening[] = result.openings
+    .flatMap((o) => (o.kind === 'drawer' ? [{ o, drawer: partsOf(o.parts) }] : []))
+    .map((d) => ({ ...d, box: boxUnion(d.drawer.map((p) => p.box)) }))
+    .sort((a, b) => b.box.max[2] - a.box.max[2] || a.box.min[0] - b.box.min[0])
+    .map(({ o, drawer }, i) => ({ id: `drawer-${i + 1}`, parts: drawer, travelMm: o.travelMm }));
 
   const subassemblies: Subassembly[] = [];
-  const removable = lidParts.length + doors.length + drawers.length > 0 && caseParts.length > 0;
+  const removable = result.openings.length > 0 && caseParts.length > 0;
   if (removable) {
     subassemblies.push(group('case', lid ? 'case without the lid' : 'case without its doors and drawers', caseParts));
-    if (lidParts.length > 0) subassemblies.push(group('lid', 'lid', lidParts));
+    if (lid) subassemblies.push(group('lid', 'lid', lid.parts));
     for (const door of doors) subassemblies.push(group(door.id, door.id.replace('-', ' '), door.parts));
     for (const drawer of drawers) subassemblies.push(group(drawer.id, drawer.id.replace('-', ' '), drawer.parts));
     subassemblies.sort((a, b) => boxVolume(b.box) - boxVolume(a.box));
@@ -141,27 +138,7 @@ export function envelopeFromResult(result: PieceResult): PieceEnvelope {
   return { kind: result.kind, box, parts, lid, doors, drawers, subassemblies, assumptions };
 }
 
-function doorsOf(parts: readonly EnvelopePart[], piece: Box3): DoorOpening[] {
-  const middle = (piece.min[0] + piece.max[0]) / 2;
-  return touchingGroups(parts.filter((p) => DOOR_ROLES.has(p.role)))
-    .map((leaf) => ({ leaf, box: boxUnion(leaf.map((p) => p.box)) }))
-    .sort((a, b) => a.box.min[0] - b.box.min[0] || b.box.max[2] - a.box.max[2])
-    .map(({ leaf, box }, i) => {
-      const hinge = (box.min[0] + box.max[0]) / 2 <= middle + 1e-6 ? 'left' : 'right';
-      return { id: `door-${i + 1}`, parts: leaf, hinge, hingeXMm: hinge === 'left' ? box.min[0] : box.max[0], hingeYMm: box.min[1], openAngleDeg: DOOR_OPEN_ANGLE_DEG };
-    });
-}
-
-function drawersOf(parts: readonly EnvelopePart[]): DrawerOpening[] {
-  return touchingGroups(parts.filter((p) => DRAWER_ROLES.has(p.role)))
-    .map((drawer) => ({ drawer, box: boxUnion(drawer.map((p) => p.box)) }))
-    .sort((a, b) => b.box.max[2] - a.box.max[2] || a.box.min[0] - b.box.min[0])
-    .map(({ drawer, box }, i) => {
-      const sides = drawer.filter((p) => p.role === 'drawer-side');
-      const travelMm = sides.length > 0 ? Math.max(...sides.map((p) => p.box.max[1] - p.box.min[1])) : box.max[1] - box.min[1];
-      return { id: `drawer-${i + 1}`, parts: drawer, travelMm };
-    });
-}
+const instanceKey = (partId: string, instance: number): string => `${partId}#${instance}`;
 
 function placedParts(result: PieceResult): EnvelopePart[] {
   const byId = new Map(result.parts.map((p) => [p.id, p]));
@@ -169,7 +146,7 @@ function placedParts(result: PieceResult): EnvelopePart[] {
     const part = byId.get(placement.partId);
     assert(part !== undefined, `placement ${placement.label} names a part that exists (${placement.partId})`);
     const size = worldSize(placement.axes, [part.lengthMm, part.widthMm, part.thicknessMm]);
-    return { partId: part.id, label: placement.label, role: part.role, box: boxAt(placement.positionMm, size) };
+    return { partId: part.id, instance: placement.instance, label: placement.label, role: part.role, box: boxAt(placement.positionMm, size) };
   });
 }
 
@@ -177,4 +154,3 @@ function group(id: string, label: string, parts: readonly EnvelopePart[]): Subas
   return { id, label, partIds: [...new Set(parts.map((p) => p.partId))], box: boxUnion(parts.map((p) => p.box)) };
 }
 
-const round = (n: number): number => Math.round(n * 10) / 10;

@@ -24,7 +24,7 @@ import { webFrame } from '../constructions/webFrame.ts';
 import { boxBetween, boxSize, boxUnion } from '../geometry/box.ts';
 import type { FeatureDraft } from '../geometry/featureDescribe.ts';
 import { sectionStiffnessNmm2, type SectionPiece } from '../structure/beam.ts';
-import type { Check, GlueUpPlan, Material } from '../types.ts';
+import type { Check, GlueUpPlan, Material, Opening } from '../types.ts';
 import { drawerFitChecks, drawerTravelCheck, undermountSetUpCheck } from '../checks/drawerFit.ts';
 import { frontClearanceChecks, revealChecks, type FrontFacts } from '../checks/fronts.ts';
 import { panelThicknessCheck } from '../checks/joinery.ts';
@@ -32,6 +32,7 @@ import { panelFloatCheck } from '../checks/panelFloat.ts';
 import { shelfSagCheck } from '../checks/shelfSag.ts';
 import { stockSizeChecks } from '../checks/stock.ts';
 import { roughSizer, type ChestBuild } from './chest.ts';
+import { doorOpening, drawerOpening, instanceRefs } from './openings.ts';
 import { caseLayout, SOLID_STOCK_MM, WEB_FRAME_CLEARANCE_MM, WEB_FRAME_GROOVE_DEPTH_MM, type CaseLayout, type CasePlan } from './caseLayout.ts';
 
 /** Doors of a cabinet (mm). */
@@ -221,6 +222,7 @@ export function buildCase(plan: CasePlan, extras: CaseExtras): CaseBuild {
   const fronts: { facts: Omit<FrontFacts, 'partIds'>; draft: PartDraft }[] = [];
   const drawerFacts: { where: string; drafts: PartDraft[]; layout: (typeof lay.drawers)[number] }[] = [];
   const doorPanels: PartDraft[] = [];
+  const doorFacts: { id: string; drafts: PartDraft[]; hinge: 'left' | 'right'; x: readonly [number, number]; frontYMm: number; bottomZMm: number }[] = [];
   if (plan.contents.kind === 'drawers') {
     const d = plan.contents.drawers;
     const dSpecies = getSpecies(d.species);
@@ -317,6 +319,7 @@ export function buildCase(plan: CasePlan, extras: CaseExtras): CaseBuild {
           type: 'hinge', a: { draft: leaf.hingePart, featureIds: leaf.hingePart.features.filter((f) => f.id.startsWith('hinge-')).map((f) => f.id) }, b: { draft: hingeTo, featureIds: [] },
           clearanceMm: 0, glued: false, floating: false, note: `${hingeCentres(fb.z[0], fb.z[1]).length} ${p.frontMount === 'inset' ? 'butt hinges' : 'concealed cup hinges'}; the door hangs on the ${fb.hinge}.`,
         });
+        doorFacts.push({ id: `door-${n}`, drafts: leaf.drafts, hinge: fb.hinge, x: fb.x, frontYMm: fb.y[0], bottomZMm: fb.z[0] });
         fronts.push({ facts: { id: `door-${n}`, label: `${member.replace('-', ' ')}`, kind: 'door', hinge: fb.hinge, x: fb.x, z: fb.z, thicknessMm: p.frontThickness }, draft: leaf.hingePart });
       }
     }
@@ -378,5 +381,10 @@ export function buildCase(plan: CasePlan, extras: CaseExtras): CaseBuild {
   checks.push(...stockSizeChecks(assembled.parts, p.maxBoardLength, p.maxBoardWidth));
   checks.push(...extras.pieceChecks(assembled.parts.map((x) => x.id), lay));
 
-  return { parts: assembled.parts, joints: assembled.joints, placements: assembled.placements, checks, bboxMm: boxSize(bbox), bboxMinMm: bbox.min };
+  const openings: Opening[] = [
+    ...doorFacts.map((f) => doorOpening(f.id, instanceRefs(assembled, f.drafts), f.hinge, f.x, f.frontYMm, f.bottomZMm)),
+    ...drawerFacts.map((f) => drawerOpening(`drawer-${f.layout.row + 1}-${f.layout.col + 1}`, instanceRefs(assembled, f.drafts), f.layout.box.y[1] - f.layout.box.y[0])),
+  ];
+
+  return { parts: assembled.parts, joints: assembled.joints, placements: assembled.placements, checks, bboxMm: boxSize(bbox), bboxMinMm: bbox.min, openings };
 }

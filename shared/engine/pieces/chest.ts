@@ -22,7 +22,7 @@ import { hingeRailRecesses, lidWithBattens, type BattenScrew } from '../construc
 import { boxBetween, boxSize, boxUnion, boxVolume } from '../geometry/box.ts';
 import type { FeatureDraft } from '../geometry/featureDescribe.ts';
 import type { WallFrame } from '../geometry/wallFrame.ts';
-import type { Box3, Check, Material, Part, PieceSpec, RoughSize, Vec3 } from '../types.ts';
+import type { Box3, Check, Material, Opening, Part, PieceSpec, RoughSize, Vec3 } from '../types.ts';
 import { bottomFitCheck } from '../checks/bottom.ts';
 import { childSafetyCheck } from '../checks/childSafety.ts';
 import { grooveChecks, panelThicknessCheck, railTongueCheck, stoppedGrooveCheck } from '../checks/joinery.ts';
@@ -31,6 +31,7 @@ import { lidSupportCheck } from '../checks/lidSupport.ts';
 import { panelFloatCheck } from '../checks/panelFloat.ts';
 import { stockSizeChecks } from '../checks/stock.ts';
 import { chestLayout, type ChestLayout, type ChestParams } from './chestLayout.ts';
+import { instanceRefs, lidOpening } from './openings.ts';
 
 /** A quarter inch: lumber thickness is sold in quarters (4/4, 5/4, 8/4 ...). */
 const QUARTER_MM = 25.4 / 4;
@@ -48,6 +49,7 @@ export interface ChestBuild {
   checks: Check[];
   bboxMm: Vec3;
   bboxMinMm: Vec3;
+  openings: Opening[];
 }
 
 /** Rough size for a finished part: allowances on length and width, thickness up to the quarter. */
@@ -214,5 +216,7 @@ export function buildChest(spec: PieceSpec, layout?: ChestLayout): ChestBuild {
     checks,
     bboxMm: boxSize(bbox),
     bboxMinMm: bbox.min,
+    // The hinge pins sit on the back rail's outer face, level with the lid's underside.
+    openings: [lidOpening(instanceRefs(assembled, lid.drafts), lay.hingeLineYMm, lay.lidBox.min[2])],
   };
 }

@@ -25,7 +25,7 @@ import { webFrame } from '../constructions/webFrame.ts';
 import { boxBetween, boxSize, boxUnion } from '../geometry/box.ts';
 import type { FeatureDraft } from '../geometry/featureDescribe.ts';
 import type { WallFrame } from '../geometry/wallFrame.ts';
-import type { Check, Material } from '../types.ts';
+import type { Check, Material, Opening } from '../types.ts';
 import { drawerFitChecks, drawerTravelCheck, undermountSetUpCheck } from '../checks/drawerFit.ts';
 import { frontClearanceChecks, legAndRailRevealChecks, revealChecks } from '../checks/fronts.ts';
 import { railTongueCheck, stoppedGrooveCheck } from '../checks/joinery.ts';
@@ -35,6 +35,7 @@ import { tipOverCheck } from '../checks/tipOver.ts';
 import { drawerStockGlueUp, type CaseBuild } from './caseBuild.ts';
 import { MIN_OPENING_MM, type DrawerPlan, type TopPlan } from './caseLayout.ts';
 import { roughSizer } from './chest.ts';
+import { drawerOpening, instanceRefs } from './openings.ts';
 import type { DresserParams } from './dresserParams.ts';
 
 /** Shoulders beside each web-frame tenon: 1/8 in. Common practice, no published source. */
@@ -367,5 +368,7 @@ export function buildFramedDresser(p: P, top: TopPlan, d: DrawerPlan, rows: numb
     ...stockSizeChecks(assembled.parts, p.maxBoardLength, p.maxBoardWidth),
     tipOverCheck(idsOf([...renamed.values()]), 'dresser', p.height, p.depth),
   ];
-  return { parts: assembled.parts, joints: assembled.joints, placements: assembled.placements, checks, bboxMm: boxSize(bbox), bboxMinMm: bbox.min };
+  const openings: Opening[] = fitFacts.map((f) => drawerOpening(`drawer-${f.dl.row + 1}-${f.dl.col + 1}`, instanceRefs(assembled, f.drafts), f.dl.box.y[1] - f.dl.box.y[0]));
+
+  return { parts: assembled.parts, joints: assembled.joints, placements: assembled.placements, checks, bboxMm: boxSize(bbox), bboxMinMm: bbox.min, openings };
 }

@@ -6,7 +6,7 @@ import { plainRoom } from './support/rooms.ts';
 
 const TOLERANCE_MM = 1e-6;
 
-const part = (partId: string, box: Box3): EnvelopePart => ({ partId, label: partId, role: 'panel', box });
+const part = (partId: string, box: Box3): EnvelopePart => ({ partId, instance: 0, label: partId, role: 'panel', box });
 
 // A cabinet 800 wide, 500 deep, 900 tall: one door 400 wide hinged on the left at the front
 // face (Y 0), and one drawer whose 450 deep box slides out its full 450.

@@ -6,8 +6,8 @@ import { boxChestResult } from './support/boxChest.ts';
 const TOLERANCE_MM = 1e-6;
 
 describe('envelopeFromResult', () => {
-  it("puts the chest lid's hinge line at the case back and the lid's underside", () => {
-    // Test chest 1016 × 483 × 584 with a 19 mm lid: hinge at Y 483, Z 584 − 19 = 565.
+  it("reads the chest lid's hinge line from the result's openings", () => {
+    // Test chest 1016 × 483 × 584 with a 19 mm lid, hinged at Y 483, Z 584 − 19 = 565.
     const env = envelopeFromResult(boxChestResult({ width: 1016, depth: 483, height: 584 }));
     expect(env.lid?.hingeYMm).toBeCloseTo(483, 9);
     expect(env.lid?.hingeZMm).toBeCloseTo(565, 9);
@@ -17,7 +17,7 @@ describe('envelopeFromResult', () => {
     expect(env.assumptions.join(' ')).toContain('common practice, no published source');
   });
 
-  it("reads the lid's opening angle from the spec when it is given", () => {
+  it("reads the lid's opening angle from the result when it is not the usual stop", () => {
     expect(envelopeFromResult(boxChestResult({ width: 1016, depth: 483, height: 584, lidOpenAngle: 105 })).lid?.openAngleDeg).toBe(105);
   });
 
@@ -50,5 +50,20 @@ describe('envelopeFromResult', () => {
       expect(Math.abs(d.travelMm - side.lengthMm)).toBeLessThan(TOLERANCE_MM);
       expect(d.parts.filter((p) => p.role === 'drawer-front')).toHaveLength(1);
     }
+  });
+
+  it("swings the engine chest's lid about the hinge line the engine reports", () => {
+    const result = buildPiece(defaultSpec('chest'));
+    const hinge = result.openings.find((o) => o.kind === 'lid')!.hingeAxis.origin;
+    const env = envelopeFromResult(result);
+    expect(Math.abs(env.lid!.hingeYMm - hinge[1])).toBeLessThan(TOLERANCE_MM);
+    expect(Math.abs(env.lid!.hingeZMm - hinge[2])).toBeLessThan(TOLERANCE_MM);
+    expect(env.lid!.parts.some((p) => p.role === 'leg')).toBe(false);
+  });
+
+  it('keeps a pair of doors that meet at the middle as two leaves', () => {
+    const spec = defaultSpec('cabinet');
+    const env = envelopeFromResult(buildPiece({ ...spec, params: { ...spec.params, frontGap: 0 } }));
+    expect(env.doors.map((d) => d.hinge)).toEqual(['left', 'right']);
   });
 });

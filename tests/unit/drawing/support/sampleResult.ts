@@ -124,6 +124,7 @@ export function sampleResult(): PieceResult {
     spec: { schemaVersion: 1, kind: 'chest', params: { width: 1000, depth: 480 }, climate: { buildMcPercent: 8, lowMcPercent: 6, highMcPercent: 10 } },
     kind: 'chest',
     engineVersion: 'sample',
+    openings: [],
     parts,
     joints: [
       { id: 'front-top-rail:leg:stub-tenon', type: 'stub-tenon', members: [{ partId: 'front-top-rail', featureIds: ['tongue-a', 'tongue-b'] }, { partId: 'leg', featureIds: ['groove-front'] }], count: 4, clearanceMm: 1.6, glued: true, floating: false, note: 'tongue 1/16 in short of the groove bottom' },

@@ -2,10 +2,11 @@
  * A plain chest result for room-fit tests: legs, four panels, a bottom, a lid with two battens,
  * each part one box, built from width, depth and height the way the chest engine lays them out
  * (origin at the front-left leg on the floor, the lid overhanging to −X, −Y and +X, +Y). Room
- * fit reads only boxes, roles and the spec, so this stands in for the engine without its joinery.
+ * fit reads only boxes, roles and the openings, so this stands in for the engine without its joinery.
  */
 import { InputError } from '../../../../shared/errors.ts';
-import type { Part, PartRole, PieceResult, PieceSpec, Placement, Vec3 } from '../../../../shared/engine/types.ts';
+import { LID_OPEN_ANGLE_DEG } from '../../../../shared/engine/pieces/openings.ts';
+import type { LidOpening, Part, PartRole, PieceResult, PieceSpec, Placement, Vec3 } from '../../../../shared/engine/types.ts';
 
 /** Sizes of the test chest, mm. */
 export interface BoxChestSize {
@@ -70,9 +71,14 @@ export function boxChestResult(size: BoxChestSize): PieceResult {
   const params: Record<string, unknown> = { width: w, depth: d, height: h, lidThickness: t };
   if (size.lidOpenAngle !== undefined) params['lidOpenAngle'] = size.lidOpenAngle;
   const spec: PieceSpec = { schemaVersion: 1, kind: 'chest', params };
+  // Hinged at the back of the legs, level with the lid's underside; 90° unless the size says.
+  const lid: LidOpening = {
+    kind: 'lid', parts: placements.filter((pl) => pl.partId === 'lid' || pl.partId === 'batten').map((pl) => ({ partId: pl.partId, instance: pl.instance })),
+    hingeAxis: { origin: [0, d, caseTop], direction: [1, 0, 0] }, openAngleDeg: size.lidOpenAngle ?? LID_OPEN_ANGLE_DEG,
+  };
   return {
     spec, kind: 'chest', engineVersion: 'test', parts, joints: [], placements, checks: [],
-    bboxMm: [w + 2 * os, d + of + ob, h], bboxMinMm: [-os, -of, 0],
+    bboxMm: [w + 2 * os, d + of + ob, h], bboxMinMm: [-os, -of, 0], openings: [lid],
     derived: { cutList: [], joinery: [], boardFeet: { bySpecies: [], total: 0 }, sheetArea: [], glueUp: [] },
   };
 }
