@@ -106,9 +106,10 @@ export function climateFrom(input: ClimateInput): Climate {
  * swelling stops) and the low no higher than the high. Returns it unchanged.
  */
 export function checkClimate(climate: Climate, field = 'climate'): Climate {
-  checkMc(climate.buildMcPercent, `${field}.buildMcPercent`);
-  checkMc(climate.lowMcPercent, `${field}.lowMcPercent`);
-  checkMc(climate.highMcPercent, `${field}.highMcPercent`);
+  // Runs on every rebuild: the fields' names are only spelled out when one is refused.
+  if (!isMc(climate.buildMcPercent)) checkMc(climate.buildMcPercent, `${field}.buildMcPercent`);
+  if (!isMc(climate.lowMcPercent)) checkMc(climate.lowMcPercent, `${field}.lowMcPercent`);
+  if (!isMc(climate.highMcPercent)) checkMc(climate.highMcPercent, `${field}.highMcPercent`);
   if (climate.lowMcPercent > climate.highMcPercent) {
     throw new InputError(
       `${field}.lowMcPercent`,
@@ -121,10 +122,13 @@ export function checkClimate(climate: Climate, field = 'climate'): Climate {
 
 /** Throws an {@link InputError} on `field` unless `mcPercent` is a number within 0–30 %. */
 export function checkMc(mcPercent: number, field: string): void {
+  if (isMc(mcPercent)) return;
   const limit = `between ${MC_LIMITS.min} % and ${MC_LIMITS.max} %`;
-  if (typeof mcPercent !== 'number' || !Number.isFinite(mcPercent) || mcPercent < MC_LIMITS.min || mcPercent > MC_LIMITS.max) {
-    throw new InputError(field, `moisture content must be ${limit} (got ${String(mcPercent)})`, limit);
-  }
+  throw new InputError(field, `moisture content must be ${limit} (got ${String(mcPercent)})`, limit);
+}
+
+function isMc(mcPercent: number): boolean {
+  return typeof mcPercent === 'number' && Number.isFinite(mcPercent) && mcPercent >= MC_LIMITS.min && mcPercent <= MC_LIMITS.max;
 }
 
 function toMc(value: MoistureInput, field: string): number {

@@ -64,19 +64,25 @@ export function glueUpBoardWidthsMm(input: Pick<GlueUpInput, 'panelWidthMm' | 'm
   if (input.arrangement !== 'equal' && input.arrangement !== 'widest-middle') {
     throw new InputError('arrangement', `must be equal or widest-middle (got "${String(input.arrangement)}")`, 'equal, widest-middle');
   }
-  // toFixed keeps 300 / 100 from counting as 3.0000000001 boards.
-  const boardCount = Math.max(1, Math.ceil(Number((input.panelWidthMm / input.maxBoardWidthMm).toFixed(9))));
+  const boardCount = Math.max(1, boardsFor(input.panelWidthMm / input.maxBoardWidthMm));
   return input.arrangement === 'equal'
-    ? Array.from({ length: boardCount }, () => input.panelWidthMm / boardCount)
+    ? new Array<number>(boardCount).fill(input.panelWidthMm / boardCount)
     : widestInMiddle(input.panelWidthMm, input.maxBoardWidthMm, boardCount);
+}
+
+// Rounding to 9 places keeps 300 / 100 from counting as 3.0000000001 boards. Only a ratio
+// within a millionth above a whole number can round down across it, so the text round trip of
+// toFixed is spent on those alone.
+function boardsFor(ratio: number): number {
+  return ratio - Math.floor(ratio) > 1e-6 ? Math.ceil(ratio) : Math.ceil(Number(ratio.toFixed(9)));
 }
 
 // The middle board (or middle two, for an even count) takes the full board width; the others
 // share the rest equally. With the fewest boards the others never exceed the full width.
 function widestInMiddle(panelWidthMm: number, maxBoardWidthMm: number, count: number): number[] {
-  if (count <= 2) return Array.from({ length: count }, () => panelWidthMm / count);
+  if (count <= 2) return new Array<number>(count).fill(panelWidthMm / count);
   const middleCount = count % 2 === 1 ? 1 : 2;
   const otherWidth = (panelWidthMm - middleCount * maxBoardWidthMm) / (count - middleCount);
-  const side = Array.from({ length: (count - middleCount) / 2 }, () => otherWidth);
-  return [...side, ...Array.from({ length: middleCount }, () => maxBoardWidthMm), ...side];
+  const sideCount = (count - middleCount) / 2;
+  return new Array<number>(count).fill(otherWidth).fill(maxBoardWidthMm, sideCount, sideCount + middleCount);
 }

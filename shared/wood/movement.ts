@@ -123,13 +123,7 @@ export function coefficientFor(species: Species, sawn: Sawn): { coefficient: num
  * to `toMcPercent` (%). WH2010 Eq. 13-2 within 6–14 %; the total-shrinkage form outside it.
  */
 export function widthChange(input: WidthChangeInput): WidthChange {
-  const c = widthChangeMm(input);
-  const out: WidthChange = {
-    changeMm: c.changeMm, changeIn: c.changeMm / MM_PER_INCH, change: signed(c.changeMm), direction: c.direction,
-    coefficient: c.coefficient, withinPublishedRange: c.withinPublishedRange, method: c.method, approximate: c.approximate,
-  };
-  if (c.note !== undefined) out.note = c.note;
-  return out;
+  return withText(widthChangeMm(input));
 }
 
 /** {@link widthChange} without display text (mm, signed). */
@@ -139,9 +133,19 @@ export function widthChangeMm(input: WidthChangeInput): WidthChangeMm {
   checkMc(input.toMcPercent, 'toMcPercent');
   const species = resolveSpecies(input.species);
   const { coefficient, direction } = coefficientFor(species, input.sawn);
-  const { fromMcPercent: from, toMcPercent: to, widthMm } = input;
-  const approximate = isApproximate(species.source.coefficients);
+  return changeOf(input.widthMm, species, coefficient, direction, input.fromMcPercent, input.toMcPercent);
+}
 
+/** The change once every input is checked; the seasonal swing calls it twice with one look-up. */
+function changeOf(
+  widthMm: number,
+  species: Species,
+  coefficient: number,
+  direction: WidthChange['direction'],
+  from: number,
+  to: number,
+): WidthChangeMm {
+  const approximate = isApproximate(species.source.coefficients);
   const within = from >= LINEAR_RANGE.min && from <= LINEAR_RANGE.max && to >= LINEAR_RANGE.min && to <= LINEAR_RANGE.max;
   if (within) {
     const changeMm = widthMm * coefficient * (to - from);
@@ -156,6 +160,15 @@ export function widthChangeMm(input: WidthChangeInput): WidthChangeMm {
     `used the total-shrinkage form with ${direction} shrinkage ${shrinkagePercent} % (WH2010 Table 4-3), approximate.`;
   // The form itself is recalled, not read in the source, so its result is always approximate.
   return numbers(changeMm, direction, effective, false, 'total-shrinkage', true, note);
+}
+
+function withText(c: WidthChangeMm): WidthChange {
+  const out: WidthChange = {
+    changeMm: c.changeMm, changeIn: c.changeMm / MM_PER_INCH, change: signed(c.changeMm), direction: c.direction,
+    coefficient: c.coefficient, withinPublishedRange: c.withinPublishedRange, method: c.method, approximate: c.approximate,
+  };
+  if (c.note !== undefined) out.note = c.note;
+  return out;
 }
 
 function numbers(
@@ -177,10 +190,9 @@ function numbers(
  * `climate`: shrinkage to the driest, swelling to the most humid, and the total between them.
  */
 export function seasonalSwing(input: SeasonalSwingInput): SeasonalSwing {
-  const climate = checkClimate(input.climate);
-  const base = { widthMm: input.widthMm, species: input.species, sawn: input.sawn, fromMcPercent: climate.buildMcPercent };
-  const toDriest = widthChange({ ...base, toMcPercent: climate.lowMcPercent });
-  const toMostHumid = widthChange({ ...base, toMcPercent: climate.highMcPercent });
+  const [climate, toDriestMm, toMostHumidMm] = seasonalChanges(input);
+  const toDriest = withText(toDriestMm);
+  const toMostHumid = withText(toMostHumidMm);
   const s = swingOf(input.widthMm, climate, toDriest, toMostHumid);
   return {
     shrinkMm: s.shrinkMm, shrinkIn: s.shrinkMm / MM_PER_INCH,
@@ -199,9 +211,23 @@ export function seasonalSwing(input: SeasonalSwingInput): SeasonalSwing {
 
 /** {@link seasonalSwing} without display text (mm). */
 export function seasonalSwingMm(input: SeasonalSwingInput): SeasonalSwingMm {
+  const [climate, toDriest, toMostHumid] = seasonalChanges(input);
+  return swingOf(input.widthMm, climate, toDriest, toMostHumid);
+}
+
+// The checks run in the order the two width changes ran them (climate, width, species, sawing),
+// so a refused input names the same field; the species is looked up once for both seasons.
+function seasonalChanges(input: SeasonalSwingInput): [Climate, WidthChangeMm, WidthChangeMm] {
   const climate = checkClimate(input.climate);
-  const base = { widthMm: input.widthMm, species: input.species, sawn: input.sawn, fromMcPercent: climate.buildMcPercent };
-  return swingOf(input.widthMm, climate, widthChangeMm({ ...base, toMcPercent: climate.lowMcPercent }), widthChangeMm({ ...base, toMcPercent: climate.highMcPercent }));
+  checkWidth(input.widthMm, 'widthMm');
+  const species = resolveSpecies(input.species);
+  const { coefficient, direction } = coefficientFor(species, input.sawn);
+  const from = climate.buildMcPercent;
+  return [
+    climate,
+    changeOf(input.widthMm, species, coefficient, direction, from, climate.lowMcPercent),
+    changeOf(input.widthMm, species, coefficient, direction, from, climate.highMcPercent),
+  ];
 }
 
 function swingOf(widthMm: number, climate: Climate, toDriest: WidthChangeMm, toMostHumid: WidthChangeMm): SeasonalSwingMm {
