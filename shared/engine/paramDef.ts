@@ -12,6 +12,19 @@ export type ParamCondition =
   | { param: string; is: readonly (string | number | boolean)[] }
   | { param: string; atLeast: number };
 
+/**
+ * Either-or: holds while every condition of at least one of the lists holds, e.g. a shelf
+ * setting shown with fixed shelves or with adjustable ones:
+ * `{ anyOf: [[{ param: 'fixedShelves', atLeast: 1 }], [{ param: 'adjustableShelves', atLeast: 1 }]] }`.
+ * Plain data like a condition; the lists hold plain conditions only.
+ */
+export interface ParamAnyOf {
+  anyOf: readonly (readonly ParamCondition[])[];
+}
+
+/** One entry of `shownWhen`: a condition, or an either-or of lists of conditions. */
+export type ParamShownEntry = ParamCondition | ParamAnyOf;
+
 /** One parameter of a piece kind. Lengths are in mm (defaults, min and max alike). */
 export interface ParamDef {
   key: string;
@@ -33,9 +46,10 @@ export interface ParamDef {
   /** One sentence on what it does and a sensible value. */
   help?: string;
   /**
-   * When the parameter means anything: a form shows it only while every condition holds (e.g.
-   * the listed row heights only when the heights are listed). Absent: always shown. A hidden
-   * parameter keeps its value and is still checked by the engine's range check.
+   * When the parameter means anything: a form shows it only while every entry holds (e.g.
+   * the listed row heights only when the heights are listed); an `anyOf` entry holds when one
+   * of its lists does, for settings needed by either of two choices. Absent: always shown. A
+   * hidden parameter keeps its value and is still checked by the engine's range check.
    */
-  shownWhen?: readonly ParamCondition[];
+  shownWhen?: readonly ParamShownEntry[];
 }

@@ -8,7 +8,7 @@
  * wall cabinet 12 in deep; shelf pins on the 32 mm system, 37 mm in from the front and back
  * edges, 5 mm holes.
  */
-import type { ParamDef } from '../paramDef.ts';
+import type { ParamDef, ParamShownEntry } from '../paramDef.ts';
 import { BASE_PARAMS, CARCASS_PARAMS, FACE_FRAME_PARAMS, FRONT_PARAMS, GROUPS, IN, MILLING_PARAMS, sheetChoice, WOOD_PARAMS, type CaseParams } from './caseParams.ts';
 
 /** The usual box sizes of each type of cabinet (mm). Common practice, no published source. */
@@ -17,6 +17,9 @@ export const CABINET_SIZES = {
   wall: { heightMm: 30 * IN, depthMm: 12 * IN, countertopMm: 0, toeKickHeightMm: 0 },
   tall: { heightMm: 84 * IN, depthMm: 24 * IN, countertopMm: 0, toeKickHeightMm: 4 * IN },
 } as const;
+
+/** The shelf settings mean something with shelves of either kind, fixed or adjustable. */
+const ANY_SHELF: ParamShownEntry = { anyOf: [[{ param: 'fixedShelves', atLeast: 1 }], [{ param: 'adjustableShelves', atLeast: 1 }]] };
 
 /** Every cabinet parameter, in form order. */
 export const CABINET_PARAMS: readonly ParamDef[] = [
@@ -41,14 +44,14 @@ export const CABINET_PARAMS: readonly ParamDef[] = [
 
   { key: 'adjustableShelves', label: 'Adjustable shelves', group: GROUPS.shelves, kind: 'number', default: 1, min: 0, max: 8, integer: true },
   { key: 'fixedShelves', label: 'Fixed shelves', group: GROUPS.shelves, kind: 'number', default: 0, min: 0, max: 4, integer: true, help: 'In dadoes; they also stiffen a tall carcass.' },
-  { key: 'shelfMaterial', label: 'Shelf material', group: GROUPS.shelves, kind: 'enum', default: 'sheet', options: [{ value: 'sheet', label: 'Sheet' }, { value: 'solid', label: 'Solid wood' }] },
-  { key: 'shelfSheet', label: 'Shelf sheet', group: GROUPS.shelves, kind: 'sheet', default: 'hardwood-plywood-3/4', options: sheetChoice(), shownWhen: [{ param: 'shelfMaterial', is: ['sheet'] }] },
-  { key: 'shelfThickness', label: 'Solid shelf thickness', group: GROUPS.shelves, kind: 'length', default: 0.75 * IN, min: 10, max: 40, shownWhen: [{ param: 'shelfMaterial', is: ['solid'] }] },
-  { key: 'shelfEdgeStrip', label: 'Solid edge strip on the shelves', group: GROUPS.shelves, kind: 'boolean', default: false, help: 'Hides the sheet edge and stiffens the shelf.' },
-  { key: 'edgeStripHeight', label: 'Edge strip height', group: GROUPS.shelves, kind: 'length', default: 1.5 * IN, min: 10, max: 100, shownWhen: [{ param: 'shelfEdgeStrip', is: [true] }] },
-  { key: 'edgeStripThickness', label: 'Edge strip thickness', group: GROUPS.shelves, kind: 'length', default: 0.75 * IN, min: 5, max: 40, shownWhen: [{ param: 'shelfEdgeStrip', is: [true] }] },
-  { key: 'shelfLoad', label: 'Load on each shelf', group: GROUPS.shelves, kind: 'number', default: 30, min: 1, max: 200, unit: 'kg/m', help: 'Spread along the shelf; a row of books is about 30 kg per metre (about 20 lb per foot, approximate).' },
-  { key: 'shelfFrontSetback', label: 'Shelf set back from the front', group: GROUPS.shelves, kind: 'length', default: 0.25 * IN, min: 0, max: 100 },
+  { key: 'shelfMaterial', label: 'Shelf material', group: GROUPS.shelves, kind: 'enum', default: 'sheet', options: [{ value: 'sheet', label: 'Sheet' }, { value: 'solid', label: 'Solid wood' }], shownWhen: [ANY_SHELF] },
+  { key: 'shelfSheet', label: 'Shelf sheet', group: GROUPS.shelves, kind: 'sheet', default: 'hardwood-plywood-3/4', options: sheetChoice(), shownWhen: [ANY_SHELF, { param: 'shelfMaterial', is: ['sheet'] }] },
+  { key: 'shelfThickness', label: 'Solid shelf thickness', group: GROUPS.shelves, kind: 'length', default: 0.75 * IN, min: 10, max: 40, shownWhen: [ANY_SHELF, { param: 'shelfMaterial', is: ['solid'] }] },
+  { key: 'shelfEdgeStrip', label: 'Solid edge strip on the shelves', group: GROUPS.shelves, kind: 'boolean', default: false, help: 'Hides the sheet edge and stiffens the shelf.', shownWhen: [ANY_SHELF] },
+  { key: 'edgeStripHeight', label: 'Edge strip height', group: GROUPS.shelves, kind: 'length', default: 1.5 * IN, min: 10, max: 100, shownWhen: [ANY_SHELF, { param: 'shelfEdgeStrip', is: [true] }] },
+  { key: 'edgeStripThickness', label: 'Edge strip thickness', group: GROUPS.shelves, kind: 'length', default: 0.75 * IN, min: 5, max: 40, shownWhen: [ANY_SHELF, { param: 'shelfEdgeStrip', is: [true] }] },
+  { key: 'shelfLoad', label: 'Load on each shelf', group: GROUPS.shelves, kind: 'number', default: 30, min: 1, max: 200, unit: 'kg/m', help: 'Spread along the shelf; a row of books is about 30 kg per metre (about 20 lb per foot, approximate).', shownWhen: [ANY_SHELF] },
+  { key: 'shelfFrontSetback', label: 'Shelf set back from the front', group: GROUPS.shelves, kind: 'length', default: 0.25 * IN, min: 0, max: 100, shownWhen: [ANY_SHELF] },
   { key: 'shelfEndClearance', label: 'Adjustable shelf end clearance', group: GROUPS.shelves, kind: 'length', default: 25.4 / 32, min: 0, max: 5, help: 'Gap at each end so the shelf lifts out.', shownWhen: [{ param: 'adjustableShelves', atLeast: 1 }] },
   { key: 'holeSpacing', label: 'Shelf-pin hole spacing', group: GROUPS.shelves, kind: 'length', default: 32, min: 12, max: 200, help: '32 mm is the usual system spacing.', shownWhen: [{ param: 'adjustableShelves', atLeast: 1 }] },
   { key: 'holeSetback', label: 'Hole line set back', group: GROUPS.shelves, kind: 'length', default: 37, min: 10, max: 200, help: 'From the carcass front edge and from the back, to the hole centres.', shownWhen: [{ param: 'adjustableShelves', atLeast: 1 }] },

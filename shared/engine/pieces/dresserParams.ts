@@ -6,7 +6,7 @@
  * stock, a 1/4 in plywood bottom in a 1/4 in deep groove 1/2 in up, drawer rows growing 1 in each
  * row down.
  */
-import type { ParamCondition, ParamDef } from '../paramDef.ts';
+import type { ParamDef, ParamShownEntry } from '../paramDef.ts';
 import { CHEST_PARAMS } from './chestParams.ts';
 import { BASE_PARAMS, CARCASS_PARAMS, FACE_FRAME_PARAMS, FRONT_PARAMS, GROUPS, IN, MILLING_PARAMS, sheetChoice, WOOD_PARAMS, type CaseParams } from './caseParams.ts';
 
@@ -24,7 +24,9 @@ const WEB_FRAMES = 'Web frames';
 /** Shown only for a dresser built like the chest; the carcass-only settings only for a carcass. */
 const FRAMED_CASE = { param: 'caseConstruction', is: ['frame-and-panel'] } as const;
 const CARCASS_CASE = { param: 'caseConstruction', is: ['carcass'] } as const;
-const onlyFor = (condition: ParamCondition) => (def: ParamDef): ParamDef => ({ ...def, shownWhen: [...(def.shownWhen ?? []), condition] });
+const onlyFor = (condition: ParamShownEntry) => (def: ParamDef): ParamDef => ({ ...def, shownWhen: [...(def.shownWhen ?? []), condition] });
+/** A sheet top is cut from the carcass sheet, so that one field stays with a frame-and-panel case too. */
+const CARCASS_OR_SHEET_TOP: ParamShownEntry = { anyOf: [[CARCASS_CASE], [{ param: 'topMaterial', is: ['sheet'] }]] };
 /** The chest's own frame-and-panel parameters, for a dresser built like the chest. */
 const FRAMED_KEYS = ['legSize', 'footHeight', 'stockThickness', 'topRailWidth', 'bottomRailWidth', 'sideStileCount', 'stileWidth', 'grooveWidth', 'legGrooveDepth', 'frameGrooveDepth', 'railTongueLength', 'tongueClearance', 'legGrooveStop', 'panelMaterial', 'panelSheet', 'panelThickness', 'panelGrain'];
 const framedParams: ParamDef[] = FRAMED_KEYS.map((key) => ({ ...onlyFor(FRAMED_CASE)(CHEST_PARAMS.find((d) => d.key === key)!), group: FRAMED }));
@@ -70,7 +72,7 @@ export const DRESSER_PARAMS: readonly ParamDef[] = [
   { key: 'webFrameRailDepth', label: 'Web-frame rail depth', group: WEB_FRAMES, kind: 'length', default: 3 * IN, min: 25, max: 200, help: 'Front to back size of the web frames\' front and back rails; in a frame-and-panel case, deeper than the legs.' },
   { key: 'runnerWidth', label: 'Side runner width', group: WEB_FRAMES, kind: 'length', default: 1.5 * IN, min: 15, max: 100, help: 'Widened where needed to reach under the drawer sides; the runners under the dividers are wider still.' },
 
-  ...CARCASS_PARAMS,
+  ...CARCASS_PARAMS.map((def) => onlyFor(def.key === 'carcassSheet' ? CARCASS_OR_SHEET_TOP : CARCASS_CASE)(def)),
   ...FACE_FRAME_PARAMS,
   ...FRONT_PARAMS,
   ...BASE_PARAMS('plinth', 4 * IN).map(onlyFor(CARCASS_CASE)),
