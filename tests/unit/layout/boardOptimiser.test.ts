@@ -2,8 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { layoutBoards } from '../../../shared/layout/boardOptimiser.ts';
 import type { BoardPartInput, BoardStock } from '../../../shared/layout/boardTypes.ts';
-import { rectContains, rectsOverlap } from '../../../shared/layout/rect.ts';
-import { GEOMETRY_TOLERANCE_MM } from './layoutCheck.ts';
+import { boardProblems } from './layoutCheck.ts';
 
 const IN = 25.4;
 // Board feet are sums of a few products; this is far below what a maker reads (0.01 BF).
@@ -98,22 +97,7 @@ describe('layoutBoards', () => {
         const defects = defectSpecs.map((d) => ({ startMm: d.start, endMm: Math.min(2438, d.start + d.len), fromEdgeMm: d.from, toEdgeMm: Math.min(203, d.from + d.w) }));
         const parts = specs.map((p, i) => ({ id: `p${i}`, name: `p${i}`, quantity: p.quantity, lengthMm: p.lengthMm, widthMm: p.widthMm, thicknessMm: 19, ...(p.grouped ? { matchGroup: `g${i}` } : {}) }));
         const layout = layoutBoards(parts, { stock: [board('stock', 2438, 203, 2, true, defects), board('buy', 2438, 203)], kerfMm, attempts: 2 });
-        for (const b of layout.boards) {
-          const whole = { x: 0, y: 0, length: b.lengthMm, width: b.widthMm };
-          b.parts.forEach((p, i) => {
-            expect(rectContains(whole, p, GEOMETRY_TOLERANCE_MM)).toBe(true);
-            for (const d of b.defects) {
-              const region = { x: d.startMm, y: d.fromEdgeMm ?? 0, length: d.endMm - d.startMm, width: (d.toEdgeMm ?? b.widthMm) - (d.fromEdgeMm ?? 0) };
-              expect(rectsOverlap(p, region)).toBe(false);
-            }
-            for (const q of b.parts.slice(i + 1)) {
-              const grow = kerfMm / 2 - GEOMETRY_TOLERANCE_MM;
-              const a = { x: p.x - grow, y: p.y - grow, length: p.length + 2 * grow, width: p.width + 2 * grow };
-              const c = { x: q.x - grow, y: q.y - grow, length: q.length + 2 * grow, width: q.width + 2 * grow };
-              expect(rectsOverlap(a, c)).toBe(false);
-            }
-          });
-        }
+        expect(layout.boards.flatMap((b) => boardProblems(b, kerfMm))).toEqual([]);
         const placed = layout.boards.flatMap((b) => b.parts).length + layout.unplaced.length;
         expect(placed).toBe(specs.reduce((n, p) => n + p.quantity, 0));
       }),

@@ -1,4 +1,5 @@
-/** Test helpers: independent checks of a sheet layout's geometry. */
+/** Test helpers: independent checks of a sheet or board layout's geometry. */
+import type { BoardPlan } from '../../../shared/layout/boardTypes.ts';
 import { rectContains, rectsOverlap, type Rect } from '../../../shared/layout/rect.ts';
 import type { SheetPlan } from '../../../shared/layout/sheetTypes.ts';
 
@@ -10,21 +11,43 @@ export function usableRect(sheet: SheetPlan): Rect {
   return { x: sheet.trimMm, y: sheet.trimMm, length: sheet.lengthMm - 2 * sheet.trimMm, width: sheet.widthMm - 2 * sheet.trimMm };
 }
 
-/** Problems found on one sheet: overlaps closer than the kerf, parts outside the usable area. */
-export function sheetProblems(sheet: SheetPlan, kerfMm: number): string[] {
+interface PlacedRect extends Rect {
+  partId: string;
+  instance: number;
+}
+
+/** Pairs of parts closer than the kerf: grown by half a kerf each (less the tolerance), neighbours must still not overlap. */
+function kerfProblems(parts: readonly PlacedRect[], kerfMm: number): string[] {
   const problems: string[] = [];
-  const usable = usableRect(sheet);
-  sheet.parts.forEach((p, i) => {
-    if (!rectContains(usable, p, GEOMETRY_TOLERANCE_MM)) problems.push(`${p.partId}#${p.instance} leaves the usable sheet`);
-    for (const q of sheet.parts.slice(i + 1)) {
-      // Grown by half a kerf each (less the tolerance), neighbours must still not overlap.
-      const grow = kerfMm / 2 - GEOMETRY_TOLERANCE_MM;
+  const grow = kerfMm / 2 - GEOMETRY_TOLERANCE_MM;
+  parts.forEach((p, i) => {
+    for (const q of parts.slice(i + 1)) {
       const a = { x: p.x - grow, y: p.y - grow, length: p.length + 2 * grow, width: p.width + 2 * grow };
       const b = { x: q.x - grow, y: q.y - grow, length: q.length + 2 * grow, width: q.width + 2 * grow };
       if (rectsOverlap(a, b)) problems.push(`${p.partId}#${p.instance} and ${q.partId}#${q.instance} are closer than the kerf`);
     }
   });
   return problems;
+}
+
+/** Problems found on one sheet: overlaps closer than the kerf, parts outside the usable area. */
+export function sheetProblems(sheet: SheetPlan, kerfMm: number): string[] {
+  const usable = usableRect(sheet);
+  const outside = sheet.parts.filter((p) => !rectContains(usable, p, GEOMETRY_TOLERANCE_MM)).map((p) => `${p.partId}#${p.instance} leaves the usable sheet`);
+  return [...outside, ...kerfProblems(sheet.parts, kerfMm)];
+}
+
+/** Problems found on one board: parts off the board, parts over a defect, overlaps closer than the kerf. */
+export function boardProblems(board: BoardPlan, kerfMm: number): string[] {
+  const whole = { x: 0, y: 0, length: board.lengthMm, width: board.widthMm };
+  // A defect with no edges given runs across the whole width.
+  const defects = board.defects.map((d) => ({ x: d.startMm, y: d.fromEdgeMm ?? 0, length: d.endMm - d.startMm, width: (d.toEdgeMm ?? board.widthMm) - (d.fromEdgeMm ?? 0) }));
+  const problems: string[] = [];
+  for (const p of board.parts) {
+    if (!rectContains(whole, p, GEOMETRY_TOLERANCE_MM)) problems.push(`${p.partId}#${p.instance} leaves the board`);
+    if (defects.some((d) => rectsOverlap(p, d))) problems.push(`${p.partId}#${p.instance} covers a defect`);
+  }
+  return [...problems, ...kerfProblems(board.parts, kerfMm)];
 }
 
 /**
