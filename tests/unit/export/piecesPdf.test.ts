@@ -9,7 +9,7 @@ import { buildPlanSet } from '../../../shared/drawing/planSet.ts';
 import { buildPiece, defaultSpec, type PieceResult } from '../../../shared/engine/index.ts';
 import { monoFontsNode } from '../../../src/export/fontsNode.ts';
 import { renderPlanSetPdf } from '../../../src/export/planSetPdf.ts';
-import { definingSizes, writes } from '../drawing/support/definingSizes.ts';
+import { sizesMissingFromPdf } from './support/planSetText.ts';
 
 let dir: string;
 const built: Record<'dresser' | 'cabinet', { result: PieceResult; pages: string[] }> = {} as never;
@@ -41,17 +41,7 @@ describe.each(['dresser', 'cabinet'] as const)('the plan set PDF of the default 
 
   it('writes every defining size of every part on its part drawing: cuts, offsets, stops, hole lines', () => {
     const { result, pages } = built[kind];
-    const letters = partLetters(result);
-    const missing: string[] = [];
-    for (const part of result.parts) {
-      const heading = `Part ${letters.get(part.id)}: ${part.name}`;
-      // The drawing and any page its cut table continues on.
-      const text = pages.filter((p) => p.includes(heading)).join('\n');
-      for (const need of definingSizes(part, 'in')) {
-        if (!need.texts.some((t) => writes(text, t))) missing.push(`${part.name}: ${need.what} (${need.texts.join(' or ')})`);
-      }
-    }
-    expect(missing).toEqual([]);
+    expect(sizesMissingFromPdf(result, pages, 'in')).toEqual([]);
   });
 
   it('lists every part in the cut list and names each on a cutting diagram or its key', () => {

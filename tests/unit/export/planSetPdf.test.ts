@@ -9,7 +9,7 @@ import { buildPlanSet } from '../../../shared/drawing/planSet.ts';
 import { buildPiece, defaultSpec, type PieceResult } from '../../../shared/engine/index.ts';
 import { monoFontsNode } from '../../../src/export/fontsNode.ts';
 import { renderPlanSetPdf } from '../../../src/export/planSetPdf.ts';
-import { definingSizes, writes } from '../drawing/support/definingSizes.ts';
+import { sizesMissingFromPdf } from './support/planSetText.ts';
 
 /** Share of dark pixels inside the drawing area below which a page counts as blank. */
 const MIN_INK_SHARE = 0.002;
@@ -50,16 +50,7 @@ describe('renderPlanSetPdf', () => {
   });
 
   it('writes every defining size of every part on its part drawing: cuts, offsets, stops, hole lines', () => {
-    const letters = partLetters(result);
-    const missing: string[] = [];
-    for (const part of result.parts) {
-      const heading = `Part ${letters.get(part.id)}: ${part.name}`;
-      const text = pages.filter((p) => p.includes(heading)).join('\n');
-      for (const need of definingSizes(part, 'in')) {
-        if (!need.texts.some((t) => writes(text, t))) missing.push(`${part.name}: ${need.what} (${need.texts.join(' or ')})`);
-      }
-    }
-    expect(missing).toEqual([]);
+    expect(sizesMissingFromPdf(result, pages, 'in')).toEqual([]);
   });
 
   it('lists every part with its finished length, width and thickness in the cut list', () => {
