@@ -97,8 +97,8 @@ export async function planOutput(target: string, opts: PlanOptions): Promise<{ d
 export const registerPlan: RegisterCommand = (program) => {
   program
     .command('plan')
-    .description('write the plan set (PDF), one view (SVG), the cut list (CSV) or the spec (JSON) of a piece kind or spec file')
-    .argument('<piece>', 'a piece kind (chest) or a spec JSON file')
+    .description('Write the plan set (PDF), one view (SVG), the cut list (CSV) or the spec (JSON) of a piece kind or spec file.')
+    .argument('<piece>', 'a piece kind (chest, dresser, cabinet) or a spec JSON file')
     .option('--set <key=value>', 'set a parameter, e.g. width=40in; repeatable', (value: string, previous: string[]) => [...previous, value], [] as string[])
     .option('--units <unit>', 'drawing units, and the unit of bare numbers in --set: in or mm', 'in')
     .option('--format <format>', 'pdf, svg, csv or json', 'pdf')
