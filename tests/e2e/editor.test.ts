@@ -5,16 +5,15 @@
  * Expected numbers come from the same engine the browser runs, never typed in by hand.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { existsSync, readFileSync } from 'node:fs';
+import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Page } from 'playwright-core';
 import { buildPiece } from '../../shared/engine/index.ts';
 import { paramDefs, validateSpec } from '../../shared/engine/params.ts';
 import type { PieceResult, PieceSpec } from '../../shared/engine/types.ts';
 import { formatLength, parseLength } from '../../shared/units/index.ts';
-import { seedDemo } from '../../server/db/seed.ts';
-import { launchBrowser, SCREENSHOT_DIR } from '../support/browser.ts';
-import { startTestServer } from '../support/testApp.ts';
+import { SCREENSHOT_DIR } from '../support/browser.ts';
+import { openDemoBrowser, type DemoBrowser } from '../support/demoBrowser.ts';
 
 interface DemoAccounts {
   password: string;
@@ -33,16 +32,12 @@ const CHEST_TITLE = 'Blanket chest, white oak';
 const INCH = { unit: 'in', precision: 16 } as const;
 const SIXTEENTH_MM = 25.4 / 16;
 
-let server: Awaited<ReturnType<typeof startTestServer>>;
-let browser: Awaited<ReturnType<typeof launchBrowser>>;
+let server: DemoBrowser['server'];
+let browser: DemoBrowser['browser'];
 let page: Page;
 
 beforeAll(async () => {
-  if (!existsSync('dist/index.html')) throw new Error('Build the client first (npm test does: vite build)');
-  server = await startTestServer();
-  await seedDemo(server.sequelize);
-  browser = await launchBrowser();
-  page = await browser.context.newPage();
+  ({ server, browser, page } = await openDemoBrowser());
 });
 afterAll(async () => {
   await browser?.close();

@@ -15,9 +15,9 @@ import { partLetters } from '../../shared/drawing/partLetters.ts';
 import { buildPiece } from '../../shared/engine/index.ts';
 import { validateSpec } from '../../shared/engine/params.ts';
 import type { PieceResult, PieceSpec } from '../../shared/engine/types.ts';
-import { DEMO_WORKSHOP, seedDemo } from '../../server/db/seed.ts';
-import { launchBrowser, SCREENSHOT_DIR } from '../support/browser.ts';
-import { startTestServer } from '../support/testApp.ts';
+import { DEMO_WORKSHOP } from '../../server/db/seed.ts';
+import { SCREENSHOT_DIR } from '../support/browser.ts';
+import { openDemoBrowser, type DemoBrowser } from '../support/demoBrowser.ts';
 
 interface DemoAccounts {
   password: string;
@@ -27,21 +27,16 @@ const demo = JSON.parse(readFileSync('server/db/demo-accounts.json', 'utf8')) as
 const designer = demo.accounts.find((a) => a.role === 'designer')!;
 const CHEST_TITLE = 'Blanket chest, white oak';
 
-let server: Awaited<ReturnType<typeof startTestServer>>;
-let browser: Awaited<ReturnType<typeof launchBrowser>>;
+let server: DemoBrowser['server'];
+let browser: DemoBrowser['browser'];
 let page: Page;
 let dir: string;
 let result: PieceResult;
 let head = 0;
 
 beforeAll(async () => {
-  if (!existsSync('dist/index.html')) throw new Error('Build the client first (npm test does: vite build)');
   dir = mkdtempSync(join(tmpdir(), 'casewright-export-'));
-  server = await startTestServer();
-  // Idempotent: creates the demo workshop only where it is missing.
-  await seedDemo(server.sequelize);
-  browser = await launchBrowser();
-  page = await browser.context.newPage();
+  ({ server, browser, page } = await openDemoBrowser());
 });
 afterAll(async () => {
   await browser?.close();

@@ -5,7 +5,7 @@
  * numbers come from the same shared code the browser runs, never typed in by hand.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { existsSync, readFileSync } from 'node:fs';
+import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Page } from 'playwright-core';
 import { buildPiece } from '../../shared/engine/index.ts';
@@ -17,9 +17,8 @@ import { parsePriceListCsv } from '../../shared/materials/priceListCsv.ts';
 import { takeoffOptionsFor, type StockSettings } from '../../shared/materials/stockSettings.ts';
 import { materialsTakeoff } from '../../shared/materials/takeoff.ts';
 import { DEMO_PRICE_LIST } from '../../server/db/demoPriceList.ts';
-import { seedDemo } from '../../server/db/seed.ts';
-import { launchBrowser, SCREENSHOT_DIR } from '../support/browser.ts';
-import { startTestServer } from '../support/testApp.ts';
+import { SCREENSHOT_DIR } from '../support/browser.ts';
+import { openDemoBrowser, type DemoBrowser } from '../support/demoBrowser.ts';
 
 const demo = JSON.parse(readFileSync('server/db/demo-accounts.json', 'utf8')) as { password: string; accounts: { role: string; email: string }[] };
 const owner = demo.accounts.find((a) => a.role === 'owner')!;
@@ -29,16 +28,12 @@ const CHEST_TITLE = 'Blanket chest, white oak';
 const BAD_CSV = 'kind,item,thickness,price,unit,name\nlumber,white-oak,4/4,9.40,,\nlumber,white-oak,eight quarters,12.00,,\nsheet,hardwood-plywood-1/2,,71.00,,\n';
 const GOOD_CSV = 'kind,item,thickness,price,unit,name\nlumber,white-oak,4/4,9.40,,\nlumber,white-oak,8/4,12.00,,\nsheet,hardwood-plywood-1/2,,71.00,,\n';
 
-let server: Awaited<ReturnType<typeof startTestServer>>;
-let browser: Awaited<ReturnType<typeof launchBrowser>>;
+let server: DemoBrowser['server'];
+let browser: DemoBrowser['browser'];
 let page: Page;
 
 beforeAll(async () => {
-  if (!existsSync('dist/index.html')) throw new Error('Build the client first (npm test does: vite build)');
-  server = await startTestServer();
-  await seedDemo(server.sequelize);
-  browser = await launchBrowser();
-  page = await browser.context.newPage();
+  ({ server, browser, page } = await openDemoBrowser());
 });
 afterAll(async () => {
   await browser?.close();

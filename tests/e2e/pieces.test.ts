@@ -6,14 +6,13 @@
  * Expected counts come from the same engine the browser runs.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { existsSync, readFileSync } from 'node:fs';
+import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Page } from 'playwright-core';
 import { buildPiece, defaultSpec } from '../../shared/engine/index.ts';
 import type { PieceKind } from '../../shared/engine/types.ts';
-import { seedDemo } from '../../server/db/seed.ts';
-import { launchBrowser, SCREENSHOT_DIR } from '../support/browser.ts';
-import { startTestServer } from '../support/testApp.ts';
+import { SCREENSHOT_DIR } from '../support/browser.ts';
+import { openDemoBrowser, type DemoBrowser } from '../support/demoBrowser.ts';
 
 interface DemoAccounts {
   password: string;
@@ -23,17 +22,13 @@ const demo = JSON.parse(readFileSync('server/db/demo-accounts.json', 'utf8')) as
 
 const CANVAS = '[data-testid="piece-view"] canvas';
 
-let server: Awaited<ReturnType<typeof startTestServer>>;
-let browser: Awaited<ReturnType<typeof launchBrowser>>;
+let server: DemoBrowser['server'];
+let browser: DemoBrowser['browser'];
 let page: Page;
 let workshopUrl = '';
 
 beforeAll(async () => {
-  if (!existsSync('dist/index.html')) throw new Error('Build the client first (npm test does: vite build)');
-  server = await startTestServer();
-  await seedDemo(server.sequelize);
-  browser = await launchBrowser();
-  page = await browser.context.newPage();
+  ({ server, browser, page } = await openDemoBrowser());
 });
 afterAll(async () => {
   await browser?.close();

@@ -6,15 +6,14 @@
  * engine run here, never typed in by hand.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { existsSync, readFileSync } from 'node:fs';
+import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Page } from 'playwright-core';
 import type { PieceSpec } from '../../shared/engine/types.ts';
 import { formatLength, parseLength } from '../../shared/units/index.ts';
-import { seedDemo } from '../../server/db/seed.ts';
 import { answerNicheFit } from '../../src/editor/nicheFit.ts';
-import { launchBrowser, SCREENSHOT_DIR } from '../support/browser.ts';
-import { startTestServer } from '../support/testApp.ts';
+import { SCREENSHOT_DIR } from '../support/browser.ts';
+import { openDemoBrowser, type DemoBrowser } from '../support/demoBrowser.ts';
 
 interface DemoAccounts {
   password: string;
@@ -33,16 +32,12 @@ const WINDOW = { position: "1'", width: "10'", sillHeight: '30"', headHeight: '8
 /** The gap to the wall, typed in millimetres: the lid stands inside the sill's reach. */
 const GAP = '50.8 mm';
 
-let server: Awaited<ReturnType<typeof startTestServer>>;
-let browser: Awaited<ReturnType<typeof launchBrowser>>;
+let server: DemoBrowser['server'];
+let browser: DemoBrowser['browser'];
 let page: Page;
 
 beforeAll(async () => {
-  if (!existsSync('dist/index.html')) throw new Error('Build the client first (npm test does: vite build)');
-  server = await startTestServer();
-  await seedDemo(server.sequelize); // idempotent: other browser tests may have seeded this database already
-  browser = await launchBrowser();
-  page = await browser.context.newPage();
+  ({ server, browser, page } = await openDemoBrowser());
 });
 afterAll(async () => {
   await browser?.close();

@@ -7,15 +7,14 @@
  * the demo reviewer (the client) then finds the stock read-only.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { existsSync, readFileSync } from 'node:fs';
+import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Page } from 'playwright-core';
 import { QueryTypes } from 'sequelize';
 import { rectsOverlap } from '../../shared/layout/rect.ts';
 import type { StockSettings } from '../../shared/materials/stockSettings.ts';
-import { seedDemo } from '../../server/db/seed.ts';
-import { launchBrowser, SCREENSHOT_DIR } from '../support/browser.ts';
-import { startTestServer } from '../support/testApp.ts';
+import { SCREENSHOT_DIR } from '../support/browser.ts';
+import { openDemoBrowser, type DemoBrowser } from '../support/demoBrowser.ts';
 
 const demo = JSON.parse(readFileSync('server/db/demo-accounts.json', 'utf8')) as { password: string; accounts: { role: string; email: string }[] };
 const owner = demo.accounts.find((a) => a.role === 'owner')!;
@@ -27,19 +26,15 @@ const IN = 25.4;
 // Lengths typed in inches come back as mm products of 25.4.
 const MM_TOLERANCE = 1e-6;
 
-let server: Awaited<ReturnType<typeof startTestServer>>;
-let browser: Awaited<ReturnType<typeof launchBrowser>>;
+let server: DemoBrowser['server'];
+let browser: DemoBrowser['browser'];
 let page: Page;
 let workshopId = '';
 let designId = '';
 let original: StockSettings | null = null;
 
 beforeAll(async () => {
-  if (!existsSync('dist/index.html')) throw new Error('Build the client first (npm test does: vite build)');
-  server = await startTestServer();
-  await seedDemo(server.sequelize);
-  browser = await launchBrowser();
-  page = await browser.context.newPage();
+  ({ server, browser, page } = await openDemoBrowser());
 });
 afterAll(async () => {
   if (page && original) await restoreStock();
