@@ -15,6 +15,8 @@ export interface RouteInput<P, Q, B> {
   body: B;
   /** The signed-in user's id, read when asked (the guard has made sure there is one). */
   readonly userId: string;
+  /** The signed-in user, read when asked, for services that need more than the id (name, e-mail). */
+  readonly user: Express.User;
 }
 
 interface HandleOptions<P, Q, B> {
@@ -44,6 +46,9 @@ function readInput<P, Q, B>(req: Request, options: HandleOptions<P, Q, B>): Rout
     params, query, body,
     get userId() {
       return currentUser(req).id;
+    },
+    get user() {
+      return currentUser(req);
     },
   };
 }

@@ -3,7 +3,7 @@ import { z } from 'zod';
 import { tokenSchema } from '../../../shared/schemas/auth.ts';
 import { invitationCreateBody, invitationParams, workshopIdParams } from '../../../shared/schemas/workshops.ts';
 import type { RouteDef } from '../../auth/access.ts';
-import { currentUser } from '../../auth/user.ts';
+import { handle } from '../../http/handle.ts';
 import type { FeatureDeps } from '../context.ts';
 import { createInvitationService } from './invitations.service.ts';
 
@@ -16,48 +16,31 @@ export function invitationRoutes(deps: FeatureDeps): RouteDef[] {
       method: 'get',
       path: '/workshops/:workshopId/invitations',
       access: { kind: 'member', action: 'invitations.manage', scope: 'workshop' },
-      handler: async (req, res) => {
-        const { workshopId } = workshopIdParams.parse(req.params);
-        res.json({ invitations: await service.list(workshopId) });
-      },
+      handler: handle({ params: workshopIdParams }, async ({ params }) => ({ invitations: await service.list(params.workshopId) })),
     },
     {
       method: 'post',
       path: '/workshops/:workshopId/invitations',
       access: { kind: 'member', action: 'invitations.manage', scope: 'workshop' },
-      handler: async (req, res) => {
-        const { workshopId } = workshopIdParams.parse(req.params);
-        const { email, role } = invitationCreateBody.parse(req.body);
-        res.status(201).json(await service.create(workshopId, email, role, currentUser(req)));
-      },
+      handler: handle({ params: workshopIdParams, body: invitationCreateBody, status: 201 }, ({ params, body, user }) => service.create(params.workshopId, body.email, body.role, user)),
     },
     {
       method: 'delete',
       path: '/workshops/:workshopId/invitations/:invitationId',
       access: { kind: 'member', action: 'invitations.manage', scope: 'workshop' },
-      handler: async (req, res) => {
-        const { workshopId, invitationId } = invitationParams.parse(req.params);
-        await service.revoke(workshopId, invitationId);
-        res.status(204).end();
-      },
+      handler: handle({ params: invitationParams, status: 204 }, ({ params }) => service.revoke(params.workshopId, params.invitationId)),
     },
     {
       method: 'get',
       path: '/invitations/:token',
       access: { kind: 'public' },
-      handler: async (req, res) => {
-        const { token } = tokenParams.parse(req.params);
-        res.json(await service.preview(token));
-      },
+      handler: handle({ params: tokenParams }, ({ params }) => service.preview(params.token)),
     },
     {
       method: 'post',
       path: '/invitations/:token/accept',
       access: { kind: 'signedIn' },
-      handler: async (req, res) => {
-        const { token } = tokenParams.parse(req.params);
-        res.json(await service.accept(token, currentUser(req)));
-      },
+      handler: handle({ params: tokenParams }, ({ params, user }) => service.accept(params.token, user)),
     },
   ];
 }

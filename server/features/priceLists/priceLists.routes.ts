@@ -4,6 +4,7 @@ import { priceListBody, priceListCsvQuery } from '../../../shared/schemas/priceL
 import { workshopIdParams } from '../../../shared/schemas/workshops.ts';
 import type { RouteDef } from '../../auth/access.ts';
 import { currentUser } from '../../auth/user.ts';
+import { handle } from '../../http/handle.ts';
 import { HttpError } from '../../http/HttpError.ts';
 import type { FeatureDeps } from '../context.ts';
 import { createPriceListService } from './priceLists.service.ts';
@@ -20,20 +21,13 @@ export function priceListRoutes(deps: FeatureDeps): RouteDef[] {
       method: 'get',
       path: '/workshops/:workshopId/price-list',
       access: { kind: 'member', action: 'workshop.read', scope: 'workshop' },
-      handler: async (req, res) => {
-        const { workshopId } = workshopIdParams.parse(req.params);
-        res.json(await service.get(workshopId));
-      },
+      handler: handle({ params: workshopIdParams }, ({ params }) => service.get(params.workshopId)),
     },
     {
       method: 'put',
       path: '/workshops/:workshopId/price-list',
       access: { kind: 'member', action: 'priceList.manage', scope: 'workshop' },
-      handler: async (req, res) => {
-        const { workshopId } = workshopIdParams.parse(req.params);
-        const priceList = priceListBody.parse(req.body);
-        res.json(await service.replace(workshopId, priceList, currentUser(req).id));
-      },
+      handler: handle({ params: workshopIdParams, body: priceListBody }, ({ params, body, userId }) => service.replace(params.workshopId, body, userId)),
     },
     {
       method: 'post',

@@ -5,7 +5,7 @@
 import { stockBody } from '../../../shared/schemas/stock.ts';
 import { workshopIdParams } from '../../../shared/schemas/workshops.ts';
 import type { RouteDef } from '../../auth/access.ts';
-import { currentUser } from '../../auth/user.ts';
+import { handle } from '../../http/handle.ts';
 import type { FeatureDeps } from '../context.ts';
 import { createStockService } from './stock.service.ts';
 
@@ -16,20 +16,13 @@ export function stockRoutes(deps: FeatureDeps): RouteDef[] {
       method: 'get',
       path: '/workshops/:workshopId/stock',
       access: { kind: 'member', action: 'workshop.read', scope: 'workshop' },
-      handler: async (req, res) => {
-        const { workshopId } = workshopIdParams.parse(req.params);
-        res.json(await service.get(workshopId));
-      },
+      handler: handle({ params: workshopIdParams }, ({ params }) => service.get(params.workshopId)),
     },
     {
       method: 'put',
       path: '/workshops/:workshopId/stock',
       access: { kind: 'member', action: 'stock.manage', scope: 'workshop' },
-      handler: async (req, res) => {
-        const { workshopId } = workshopIdParams.parse(req.params);
-        const { stock, version } = stockBody.parse(req.body);
-        res.json(await service.replace(workshopId, stock, version, currentUser(req).id));
-      },
+      handler: handle({ params: workshopIdParams, body: stockBody }, ({ params, body, userId }) => service.replace(params.workshopId, body.stock, body.version, userId)),
     },
   ];
 }
