@@ -9,7 +9,7 @@ import { InputError } from '../errors.ts';
 import { dual, type DualLength } from '../units/dual.ts';
 import { MM_PER_INCH } from '../units/length.ts';
 import { checkClimate, type Climate } from './climate.ts';
-import { checkWidth, seasonalSwing, type Sawn, type SeasonalSwing } from './movement.ts';
+import { checkWidth, seasonalSwing, seasonalSwingMm, type Sawn, type SeasonalSwing, type SeasonalSwingInput, type SeasonalSwingMm } from './movement.ts';
 import { resolveMaterial, type MaterialInput } from './resolve.ts';
 
 /**
@@ -81,6 +81,63 @@ const SHOW = { inchPrecision: 32, mmPrecision: 0.1 } as const;
  * reports the shortfall and the fix (narrower panel, deeper groove, or plywood).
  */
 export function panelFloat(input: PanelFloatInput): PanelFloat {
+  const f = floatOf(input, seasonalSwing);
+  return {
+    material: f.material,
+    gapEachSideMm: f.gapEachSideMm,
+    gapEachSideIn: f.gapEachSideMm / MM_PER_INCH,
+    gapEachSide: dual(f.gapEachSideMm, SHOW),
+    panelWidthMm: input.panelWidthMm,
+    movement: f.movement,
+    engagementAtBuildMm: f.engagementAtBuildMm,
+    engagementAtDriestMm: f.engagementAtDriestMm,
+    engagementMinMm: f.engagementMinMm,
+    engagementAtBuild: dual(f.engagementAtBuildMm, SHOW),
+    engagementAtDriest: dual(f.engagementAtDriestMm, SHOW),
+    engagementMin: dual(f.engagementMinMm, SHOW),
+    check: floatCheck(f),
+    notes: f.notes,
+  };
+}
+
+/**
+ * {@link panelFloat} without display text, for the piece engine: the same numbers (mm) and the
+ * same refusals; the check's texts are written only on asking ({@link panelFloatCheckOf}).
+ */
+export interface PanelFloatMm {
+  material: { kind: 'solid' | 'sheet'; name: string };
+  /** Panel width across the grain at build, tongues included, mm (as given). */
+  panelWidthMm: number;
+  /** Depth of the groove at each side, mm (as given). */
+  grooveDepthMm: number;
+  /** Seasonal swing of the panel; null for sheet goods (negligible movement). */
+  movement: SeasonalSwingMm | null;
+  /** Gap at each side at build, tongue in each groove at build and at the driest, and the least allowed, mm. */
+  gapEachSideMm: number;
+  engagementAtBuildMm: number;
+  engagementAtDriestMm: number;
+  engagementMinMm: number;
+  /** Fit clearance each side, mm. */
+  clearanceMm: number;
+  /** How much engagement is missing at the driest, mm (0 when the groove holds the panel). */
+  shortfallMm: number;
+  /** Whether the least engagement was given rather than the default half groove. */
+  minGiven: boolean;
+  notes: string[];
+}
+
+/** The float a captured panel needs, in numbers only (see {@link panelFloat}). */
+export function panelFloatMm(input: PanelFloatInput): PanelFloatMm {
+  return floatOf(input, seasonalSwingMm);
+}
+
+/** The check {@link panelFloat} would carry for these numbers, texts included. */
+export function panelFloatCheckOf(float: PanelFloatMm): FloatCheck {
+  return floatCheck(float);
+}
+
+// Shared by panelFloat and panelFloatMm so both refuse the same inputs in the same order.
+function floatOf<M extends SeasonalSwingMm>(input: PanelFloatInput, swing: (i: SeasonalSwingInput) => M): PanelFloatMm & { movement: M | null } {
   checkWidth(input.panelWidthMm, 'panelWidthMm');
   checkWidth(input.grooveDepthMm, 'grooveDepthMm');
   const climate = checkClimate(input.climate);
@@ -95,7 +152,7 @@ export function panelFloat(input: PanelFloatInput): PanelFloat {
   const material = resolveMaterial(input.material);
   const movement =
     material.kind === 'solid'
-      ? seasonalSwing({ widthMm: input.panelWidthMm, species: material.species, sawn: input.sawn ?? 'unknown', climate })
+      ? swing({ widthMm: input.panelWidthMm, species: material.species, sawn: input.sawn ?? 'unknown', climate })
       : null;
   const swellMm = movement?.swellMm ?? 0;
   const shrinkMm = movement?.shrinkMm ?? 0;
@@ -112,40 +169,21 @@ export function panelFloat(input: PanelFloatInput): PanelFloat {
   const name = material.kind === 'solid' ? material.species.name : material.name;
   return {
     material: { kind: material.kind, name },
-    gapEachSideMm,
-    gapEachSideIn: gapEachSideMm / MM_PER_INCH,
-    gapEachSide: dual(gapEachSideMm, SHOW),
     panelWidthMm: input.panelWidthMm,
+    grooveDepthMm: input.grooveDepthMm,
     movement,
+    gapEachSideMm,
     engagementAtBuildMm,
     engagementAtDriestMm,
     engagementMinMm,
-    engagementAtBuild: dual(engagementAtBuildMm, SHOW),
-    engagementAtDriest: dual(engagementAtDriestMm, SHOW),
-    engagementMin: dual(engagementMinMm, SHOW),
-    check: floatCheck({
-      shortfallMm, gapEachSideMm, engagementAtDriestMm, engagementMinMm, clearanceMm, movement,
-      grooveDepthMm: input.grooveDepthMm,
-      panelWidthMm: input.panelWidthMm,
-      minGiven: input.tongueEngagementMinMm !== undefined,
-    }),
+    clearanceMm,
+    shortfallMm,
+    minGiven: input.tongueEngagementMinMm !== undefined,
     notes,
   };
 }
 
-interface CheckFacts {
-  shortfallMm: number;
-  gapEachSideMm: number;
-  engagementAtDriestMm: number;
-  engagementMinMm: number;
-  clearanceMm: number;
-  movement: SeasonalSwing | null;
-  grooveDepthMm: number;
-  panelWidthMm: number;
-  minGiven: boolean;
-}
-
-function floatCheck(facts: CheckFacts): FloatCheck {
+function floatCheck(facts: PanelFloatMm): FloatCheck {
   const shortfall = dual(facts.shortfallMm, SHOW);
   const gap = dual(facts.gapEachSideMm, SHOW);
   const kept = dual(facts.engagementAtDriestMm, SHOW);

@@ -1,10 +1,10 @@
-/** Panel float against seasonal movement, from the wood library's `panelFloat`. */
-import type { PanelFloat } from '../../wood/float.ts';
+/** Panel float against seasonal movement, from the wood library's `panelFloatMm`. */
+import { panelFloatCheckOf, type PanelFloatMm } from '../../wood/float.ts';
 import type { Check } from '../types.ts';
 import { both, check } from './check.ts';
 
 /** Whether the panels of one wall keep a tongue in their grooves through the seasons. */
-export function panelFloatCheck(partIds: readonly string[], wall: string, acrossGrainWidthMm: number, grooveDepthMm: number, float: PanelFloat): Check {
+export function panelFloatCheck(partIds: readonly string[], wall: string, acrossGrainWidthMm: number, grooveDepthMm: number, float: PanelFloatMm): Check {
   const numbers = {
     acrossGrainWidthMm,
     grooveDepthMm,
@@ -13,18 +13,19 @@ export function panelFloatCheck(partIds: readonly string[], wall: string, across
     shrinkMm: float.movement?.shrinkMm ?? 0,
     engagementAtDriestMm: float.engagementAtDriestMm,
     engagementMinMm: float.engagementMinMm,
-    shortfallMm: float.check.shortfallMm,
+    shortfallMm: float.shortfallMm,
   };
+  const floatCheck = panelFloatCheckOf(float);
   const title = `Panel float, ${wall} panels`;
-  if (float.check.ok) {
+  if (floatCheck.ok) {
     return check({
       id: `panel-float:${wall}`, severity: 'info', title, partIds, numbers,
-      message: `${float.material.name}, ${both(acrossGrainWidthMm)} across the grain: leave ${both(float.gapEachSideMm)} at each moving edge; ${float.check.message}`,
+      message: `${float.material.name}, ${both(acrossGrainWidthMm)} across the grain: leave ${both(float.gapEachSideMm)} at each moving edge; ${floatCheck.message}`,
     });
   }
   return check({
     id: `panel-float:${wall}`, severity: 'warning', title, partIds, numbers,
-    message: `${float.material.name}, ${both(acrossGrainWidthMm)} across the grain in ${both(grooveDepthMm)} grooves: ${float.check.message}`,
-    fix: float.check.fix,
+    message: `${float.material.name}, ${both(acrossGrainWidthMm)} across the grain in ${both(grooveDepthMm)} grooves: ${floatCheck.message}`,
+    fix: floatCheck.fix,
   });
 }

@@ -4,7 +4,7 @@
  * differ only in what they ask for; every part comes from the shared constructions.
  */
 import type { Climate } from '../../wood/climate.ts';
-import { panelFloat, type PanelFloat } from '../../wood/float.ts';
+import { panelFloatMm, type PanelFloatMm } from '../../wood/float.ts';
 import { glueUpBoardWidthsMm } from '../../wood/glueUp.ts';
 import { getSheetGood, type SheetGoodId } from '../../wood/sheetGoods.ts';
 import { sheetStiffness } from '../../wood/sheetStiffness.ts';
@@ -66,10 +66,10 @@ export interface CaseExtras {
 }
 
 /** The float a door's panel needs: its width across the grain (mm) and the wood library's answer. */
-export function doorPanelFloat(dO: DoorOptions, doorWidthMm: number, speciesId: SpeciesId, climate: Climate): { acrossGrain: number; float: PanelFloat } {
+export function doorPanelFloat(dO: DoorOptions, doorWidthMm: number, speciesId: SpeciesId, climate: Climate): { acrossGrain: number; float: PanelFloatMm } {
   // Door panels stand with their grain vertical, so they move side to side into the stiles.
   const acrossGrain = doorWidthMm - 2 * dO.frame.stileWidthMm + 2 * dO.frame.grooveDepthMm;
-  const float = panelFloat({ panelWidthMm: acrossGrain, material: dO.frame.panel === 'solid' ? speciesId : dO.frame.panelSheet, sawn: 'unknown', grooveDepthMm: dO.frame.grooveDepthMm, climate });
+  const float = panelFloatMm({ panelWidthMm: acrossGrain, material: dO.frame.panel === 'solid' ? speciesId : dO.frame.panelSheet, sawn: 'unknown', grooveDepthMm: dO.frame.grooveDepthMm, climate });
   return { acrossGrain, float };
 }
 

@@ -5,7 +5,7 @@
  * builder read the same numbers, so what is checked is what gets built.
  */
 import { getSheetGood } from '../../wood/sheetGoods.ts';
-import { panelFloat, type PanelFloat } from '../../wood/float.ts';
+import { panelFloatMm, type PanelFloatMm } from '../../wood/float.ts';
 import type { Climate } from '../../wood/climate.ts';
 import type { SpeciesId } from '../../wood/species.ts';
 import type { SheetGoodId } from '../../wood/sheetGoods.ts';
@@ -44,7 +44,7 @@ export interface WallFloat {
   acrossGrainWidthMm: number;
   /** Shallowest groove the panel's moving edges sit in, mm. */
   grooveDepthMm: number;
-  float: PanelFloat;
+  float: PanelFloatMm;
 }
 
 /** Every governing dimension of a chest, mm, world coordinates (see `types.ts`). */
@@ -79,7 +79,7 @@ function wallFloat(p: ChestParams, climate: Climate, bayMm: number, openingHeigh
   // into a leg groove on one side and a stile or leg groove on the other, the shallower ruling.
   const acrossGrainWidthMm = vertical ? bayMm + p.legGrooveDepth + p.frameGrooveDepth : openingHeightMm + 2 * p.frameGrooveDepth;
   const grooveDepthMm = vertical ? Math.min(p.legGrooveDepth, p.frameGrooveDepth) : p.frameGrooveDepth;
-  const float = panelFloat({
+  const float = panelFloatMm({
     panelWidthMm: acrossGrainWidthMm,
     material: solid ? p.species : p.panelSheet,
     sawn: 'unknown',

@@ -8,7 +8,7 @@
  */
 import { InputError } from '../../errors.ts';
 import type { Climate } from '../../wood/climate.ts';
-import { panelFloat, type PanelFloat } from '../../wood/float.ts';
+import { panelFloatMm, type PanelFloatMm } from '../../wood/float.ts';
 import { glueUpBoardWidthsMm } from '../../wood/glueUp.ts';
 import { getSheetGood, type SheetGoodId } from '../../wood/sheetGoods.ts';
 import { getSpecies } from '../../wood/species.ts';
@@ -69,19 +69,19 @@ export interface FramedLayout {
   runnersX: [number, number][];
   backRailY: [number, number];
   panel: { thicknessMm: number; sheet: boolean };
-  floats: { side: { across: number; groove: number; float: PanelFloat }; back: { across: number; groove: number; float: PanelFloat } };
+  floats: { side: { across: number; groove: number; float: PanelFloatMm }; back: { across: number; groove: number; float: PanelFloatMm } };
   drawers: { row: number; col: number; opening: { x: [number, number]; z: [number, number] }; box: { x: [number, number]; y: [number, number]; z: [number, number] }; availableDepthMm: number }[];
   /** Spacers the metal slides screw to, each row's left to right; none on wooden runners. */
   spacers: SlideSpacerPlacement[];
 }
 
-function wallFloat(p: P, climate: Climate, spanMm: number, count: number, openingHeightMm: number): { across: number; groove: number; float: PanelFloat } {
+function wallFloat(p: P, climate: Climate, spanMm: number, count: number, openingHeightMm: number): { across: number; groove: number; float: PanelFloatMm } {
   const solid = p.panelMaterial === 'solid';
   const vertical = solid && p.panelGrain === 'vertical';
   const bay = (spanMm - count * p.stileWidth) / (count + 1);
   const across = vertical ? bay + p.legGrooveDepth + p.frameGrooveDepth : openingHeightMm + 2 * p.frameGrooveDepth;
   const groove = vertical ? Math.min(p.legGrooveDepth, p.frameGrooveDepth) : p.frameGrooveDepth;
-  return { across, groove, float: panelFloat({ panelWidthMm: across, material: solid ? p.species : p.panelSheet, sawn: 'unknown', grooveDepthMm: groove, climate }) };
+  return { across, groove, float: panelFloatMm({ panelWidthMm: across, material: solid ? p.species : p.panelSheet, sawn: 'unknown', grooveDepthMm: groove, climate }) };
 }
 
 /**
@@ -229,7 +229,7 @@ export function buildFramedDresser(p: P, top: TopPlan, d: DrawerPlan, rows: numb
   const drafts: PartDraft[] = [];
 
   // Sides and back: the chest's frame-and-panel face between the legs.
-  const panelFor = (float: PanelFloat): FacePanelSpec => (p.panelMaterial === 'solid'
+  const panelFor = (float: PanelFloatMm): FacePanelSpec => (p.panelMaterial === 'solid'
     ? { material: solid, thicknessMm: lay.panel.thicknessMm, grain: p.panelGrain, gapAcrossGrainMm: float.gapEachSideMm, gapAlongGrainMm: p.tongueClearance }
     : { material: sheet(p.panelSheet), thicknessMm: lay.panel.thicknessMm, grain: 'none', gapAcrossGrainMm: float.gapEachSideMm, gapAlongGrainMm: float.gapEachSideMm });
   const wall = (name: 'back' | 'left' | 'right', frame: WallFrame) => frameAndPanelFace({
