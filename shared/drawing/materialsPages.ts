@@ -67,6 +67,15 @@ function draft(spec: SheetSpec, name: string, flow: readonly FlowBlock[], views:
   return { name, widthMm, heightMm, views, flow, primitives: [], flowArea: flowArea ?? drawingArea(spec) };
 }
 
+/**
+ * Narrowest column the summary's widest tables read in, mm: the eight columns of the boards
+ * table at 7.5 pt keep their figures on one line.
+ */
+const MIN_SUMMARY_COLUMN_MM = 115;
+
+/** Columns of the summary page: two where the page is wide enough (landscape), so it fits one page. */
+const summaryColumns = (spec: SheetSpec): number => (drawingArea(spec).w >= 2 * MIN_SUMMARY_COLUMN_MM ? 2 : 1);
+
 /** Boards and sheets the layouts use against what the parts need, and anything left unplaced. */
 function takeoffBlocks(takeoff: MaterialsTakeoff, units: DrawingUnits): TableBlock[] {
   const blocks: TableBlock[] = [];
@@ -239,7 +248,11 @@ export function materialsSheets(result: PieceResult, spec: SheetSpec, units: Dra
   const stock = materials.stock
     ? stockBlock(materials.stock, materials.stockSource ?? 'the workshop\'s stock', units)
     : stockBlock(DEFAULT_STOCK_SETTINGS, 'the default stock (no workshop stock was given)', units);
-  const summary = draft(spec, 'Materials', [stock, ...takeoffBlocks(takeoff, units), ...splitBlock(takeoff), ...buyingBlocks(takeoff, materials), ...materialsBlocks(result)]);
+  const summary: SheetDraft = {
+    ...draft(spec, 'Materials', [stock, ...takeoffBlocks(takeoff, units), ...splitBlock(takeoff), ...buyingBlocks(takeoff, materials), ...materialsBlocks(result)]),
+    flowColumns: summaryColumns(spec),
+    tightTables: true,
+  };
   const sheets = takeoff.sheets.flatMap((s) => diagramSheets(
     s.layout.sheets.map((plan, i) => sheetInput(
       `sheet-${s.sheetId}-${i + 1}`,

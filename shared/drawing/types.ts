@@ -200,6 +200,13 @@ export interface Sheet {
   primitives: readonly Primitive[];
   /** The free area for flowing blocks, paper mm. */
   flowArea: Rect;
+  /**
+   * Columns the flow is set in, side by side across `flowArea`: each filled down before the
+   * next, a block moving whole to the next column when it would not fit. Absent: one.
+   */
+  flowColumns?: number;
+  /** Tables set with tighter rows (less padding in each cell), for a page of many short tables. */
+  tightTables?: boolean;
 }
 
 /** The whole plan set, ready to render. */

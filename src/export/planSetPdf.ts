@@ -103,8 +103,12 @@ interface PageRecord {
   continued: boolean;
 }
 
+/** Padding inside a table cell, mm: the usual, and the tight rows of a sheet that asks for them. */
+const CELL_PADDING_MM = 1;
+const TIGHT_CELL_PADDING_MM = 0.6;
+
 /** Draws one table; returns the y below it. New pages it adds are recorded against `sheet`. */
-function drawTable(doc: jsPDF, block: TableBlock, y: number, area: Rect, page: Rect, onNewPage: () => void): number {
+function drawTable(doc: jsPDF, block: TableBlock, y: number, area: Rect, page: Rect, onNewPage: () => void, cellPadding = CELL_PADDING_MM): number {
   doc.setFont(SANS, 'bold');
   doc.setFontSize(10);
   doc.setTextColor(...rgb(PALETTE.ink));
@@ -121,7 +125,7 @@ function drawTable(doc: jsPDF, block: TableBlock, y: number, area: Rect, page: R
     theme: 'grid',
     margin: { left: area.x, right: page.w - (area.x + area.w), top: drawingArea({ size: 'a4', orientation: 'portrait' }).y, bottom: page.h - (area.y + area.h) },
     tableWidth: area.w,
-    styles: { font: SANS, fontSize: 7.5, cellPadding: 1, textColor: rgb(PALETTE.ink), lineColor: rgb('#8a8378'), lineWidth: 0.1, overflow: 'linebreak' },
+    styles: { font: SANS, fontSize: 7.5, cellPadding, textColor: rgb(PALETTE.ink), lineColor: rgb('#8a8378'), lineWidth: 0.1, overflow: 'linebreak' },
     headStyles: { fillColor: rgb('#e9dfc9'), textColor: rgb(PALETTE.ink), fontStyle: 'bold' },
     columnStyles,
     didDrawPage: () => {
@@ -142,6 +146,33 @@ function drawTable(doc: jsPDF, block: TableBlock, y: number, area: Rect, page: R
     after += 2.5 + lines.length * 2.8;
   }
   return after + 4;
+}
+
+/** Clear space between two columns of a sheet's flow, mm. */
+const COLUMN_GAP_MM = 8;
+
+/** Column `index` of `columns` across `area`. */
+function columnRect(area: Rect, columns: number, index: number): Rect {
+  const w = (area.w - (columns - 1) * COLUMN_GAP_MM) / columns;
+  return { x: area.x + index * (w + COLUMN_GAP_MM), y: area.y, w, h: area.h };
+}
+
+/**
+ * Measures flow blocks by setting them on a page too tall to break, in a document of their
+ * own, so a block can be moved whole to the next column before it is drawn.
+ */
+function blockMeasurer(fonts: MonoFonts, pageWidthMm: number): (block: TableBlock | TextBlock, width: number, cellPadding: number) => number {
+  const tallMm = 5000;
+  let scratch: jsPDF | null = null;
+  return (block, width, cellPadding) => {
+    if (!scratch) {
+      scratch = new jsPDF({ unit: 'mm', format: [pageWidthMm, tallMm], orientation: 'portrait', compress: true });
+      embedFonts(scratch, fonts);
+    }
+    const area: Rect = { x: 0, y: 0, w: width, h: tallMm };
+    const page: Rect = { x: 0, y: 0, w: pageWidthMm, h: tallMm };
+    return block.type === 'table' ? drawTable(scratch, block, 0, area, page, () => undefined, cellPadding) : drawText(scratch, block, 0, area);
+  };
 }
 
 function textBlockHeight(doc: jsPDF, block: TextBlock, width: number): number {
@@ -179,6 +210,7 @@ export async function renderPlanSetPdf(model: PlanSetModel, fonts: MonoFonts, on
   doc.setProperties({ title: `${model.info.title} — plan set, revision ${model.info.revision}`, creator: 'Casewright' });
   const pages: PageRecord[] = [];
   const total = model.sheets.length;
+  const measure = blockMeasurer(fonts, doc.internal.pageSize.getWidth());
 
   for (const [i, sheet] of model.sheets.entries()) {
     if (i > 0) doc.addPage(model.sheet.size, orientation);
@@ -187,26 +219,39 @@ export async function renderPlanSetPdf(model: PlanSetModel, fonts: MonoFonts, on
     for (const view of sheet.views) for (const p of view.primitives) drawPrimitive(doc, p);
     for (const p of sheet.primitives) drawPrimitive(doc, p);
 
-    let area = sheet.flowArea;
-    let y = area.y;
+    const columns = Math.max(1, sheet.flowColumns ?? 1);
+    const cellPadding = sheet.tightTables ? TIGHT_CELL_PADDING_MM : CELL_PADDING_MM;
     const full = drawingArea(model.sheet);
+    let column = 0;
+    let area = columnRect(sheet.flowArea, columns, column);
+    let y = area.y;
     const newPage = (): void => {
       doc.addPage(model.sheet.size, orientation);
       pages.push({ sheet, continued: true });
-      area = full;
+      column = 0;
+      area = columnRect(full, columns, column);
+      y = area.y;
+    };
+    // The next column down, or a fresh page after the last one.
+    const nextColumn = (): void => {
+      if (column + 1 >= columns) return newPage();
+      column += 1;
+      area = columnRect(pages[pages.length - 1]!.continued ? full : sheet.flowArea, columns, column);
       y = area.y;
     };
     for (const block of sheet.flow) {
+      // In columns, a block that would not fit where it is goes whole to the next column.
+      if (columns > 1 && y > area.y && y + measure(block, area.w, cellPadding) > area.y + area.h) nextColumn();
       if (block.type === 'table') {
-        // A table whose title and first rows do not fit starts on a fresh page.
-        if (y + 20 > area.y + area.h) newPage();
+        // A table whose title and first rows do not fit starts in the next column or on a fresh page.
+        if (y + 20 > area.y + area.h) nextColumn();
         y = drawTable(doc, block, y, area, page, () => {
           pages.push({ sheet, continued: true });
-          area = full;
-        });
+          area = columnRect(full, columns, column);
+        }, cellPadding);
       } else {
         const h = textBlockHeight(doc, block, area.w);
-        if (y + h > area.y + area.h && y > area.y) newPage();
+        if (y + h > area.y + area.h && y > area.y) nextColumn();
         y = drawText(doc, block, y, area);
       }
     }

@@ -1,5 +1,10 @@
+import { execFileSync } from 'node:child_process';
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { materialsSheets } from '../../../shared/drawing/materialsPages.ts';
+import { buildPlanSet } from '../../../shared/drawing/planSet.ts';
 import type { Label, PlacedView, Segment, TableBlock, TextBlock } from '../../../shared/drawing/types.ts';
 import { buildPiece, defaultSpec, type PieceResult } from '../../../shared/engine/index.ts';
 import { costOf } from '../../../shared/materials/cost.ts';
@@ -8,6 +13,9 @@ import { parsePriceListCsv } from '../../../shared/materials/priceListCsv.ts';
 import { DEFAULT_STOCK_SETTINGS, takeoffOptionsFor, type StockSettings } from '../../../shared/materials/stockSettings.ts';
 import { materialsTakeoff, type MaterialsTakeoff } from '../../../shared/materials/takeoff.ts';
 import { matchRunsOf } from '../../../shared/layout/diagram.ts';
+import { DEMO_PRICE_LIST } from '../../../server/db/demoPriceList.ts';
+import { monoFontsNode } from '../../../src/export/fontsNode.ts';
+import { renderPlanSetPdf } from '../../../src/export/planSetPdf.ts';
 
 /** Paper mm: a diagram drawn to scale matches its stock to a hundredth of a millimetre. */
 const PAPER_TOLERANCE_MM = 0.01;
@@ -185,4 +193,39 @@ describe('materialsSheets on a workshop\'s stock', () => {
   it('names the bad field of a stock it cannot lay out', () => {
     expect(() => materialsSheets(result, SHEET, 'in', { stock: tenFootStock({ kerfMm: -1 }) })).toThrow(expect.objectContaining({ name: 'InputError', field: 'kerfMm' }));
   });
+});
+
+describe('materialsSheets summary page', () => {
+  it('sets the summary in two columns of tight tables on a landscape page, and in one on a portrait letter page', () => {
+    const [landscape] = materialsSheets(result, SHEET, 'in', { takeoff });
+    expect(landscape!.name).toBe('Materials');
+    expect(landscape!.flowColumns).toBe(2);
+    expect(landscape!.tightTables).toBe(true);
+    const [portrait] = materialsSheets(result, { size: 'letter', orientation: 'portrait' }, 'in', { takeoff });
+    expect(portrait!.flowColumns).toBe(1);
+  });
+
+  it('fits the default chest, dresser and cabinet summary with the demo price list on one page, with no continued page', async () => {
+    const dir = mkdtempSync(join(tmpdir(), 'casewright-materials-'));
+    try {
+      const fonts = await monoFontsNode();
+      for (const kind of ['chest', 'dresser', 'cabinet'] as const) {
+        const model = buildPlanSet(buildPiece(defaultSpec(kind)), {
+          title: kind, revision: '1', date: '2025-03-14', workshopName: 'Test workshop', sheet: SHEET, units: 'in', materials: { priceList: DEMO_PRICE_LIST },
+        });
+        const summary = model.sheets.filter((s) => s.name === 'Materials');
+        expect(summary, kind).toHaveLength(1);
+        const path = join(dir, `${kind}.pdf`);
+        writeFileSync(path, new Uint8Array(await renderPlanSetPdf({ ...model, sheets: summary }, fonts)));
+        const pages = execFileSync('pdftotext', ['-layout', path, '-'], { encoding: 'utf8', stdio: ['ignore', 'pipe', 'ignore'] }).split('\f').filter((p) => p.trim());
+        // The price list is on the page: the cost table and the priced shopping list are both there.
+        expect(pages.join('\n'), kind).toContain('Cost (USD)');
+        expect(pages.join('\n'), kind).toContain('Shopping list (USD)');
+        expect(pages.join('\n'), kind).not.toContain('Materials (continued)');
+        expect(pages, kind).toHaveLength(1);
+      }
+    } finally {
+      rmSync(dir, { recursive: true, force: true });
+    }
+  }, 60_000);
 });
