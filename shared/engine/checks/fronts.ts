@@ -48,11 +48,12 @@ export function frontClearanceChecks(fronts: readonly FrontFacts[]): Check[] {
       if (!side && !below) continue;
       const gap = side ? b.x[0] - a.x[1] : a.z[0] - b.z[1];
       if (side && gap > 1e-6 && fronts.some((c) => c !== a && c !== b && overlaps(c.z, a.z) && c.x[0] >= a.x[1] - 1e-6 && c.x[1] <= b.x[0] + 1e-6)) continue;
-      const partIds = [...new Set([...a.partIds, ...b.partIds])];
-      const where = `${a.label} and ${b.label}`;
+      // Most pairs pass: their ids and names are written only for a check that fires.
+      const partIds = (): string[] => [...new Set([...a.partIds, ...b.partIds])];
+      const where = (): string => `${a.label} and ${b.label}`;
       if (gap < -1e-6) {
         out.push(check({
-          id: `fronts-collide:${a.id}:${b.id}`, severity: 'error', title: `Fronts overlap: ${where}`, partIds, numbers: { gapMm: gap },
+          id: `fronts-collide:${a.id}:${b.id}`, severity: 'error', title: `Fronts overlap: ${where()}`, partIds: partIds(), numbers: { gapMm: gap },
           message: `The ${a.label} and the ${b.label} overlap by ${both(-gap)}: neither can open.`,
           fix: 'Reduce the overlay, or widen the rail or mullion between them.',
         }));
@@ -63,7 +64,7 @@ export function frontClearanceChecks(fronts: readonly FrontFacts[]): Check[] {
         const need = Math.max(0, ...sweeps.map((d) => doorSweepMm(d.x[1] - d.x[0], d.thicknessMm)));
         if (sweeps.length > 0 && gap < need - 1e-9) {
           out.push(check({
-            id: `door-hits-neighbour:${a.id}:${b.id}`, severity: 'warning', title: `A door hits its neighbour as it opens: ${where}`, partIds,
+            id: `door-hits-neighbour:${a.id}:${b.id}`, severity: 'warning', title: `A door hits its neighbour as it opens: ${where()}`, partIds: partIds(),
             numbers: { gapMm: gap, sweepMm: need },
             message: `Opening, the door's back free corner swings ${both(need)} past its closed place (√(w² + t²) − w), but the gap is only ${both(gap)}: it binds on the ${sweeps[0] === a ? b.label : a.label}.`,
             fix: `Leave at least ${both(need)} between them, or bevel the meeting edges a few degrees toward the back.`,
@@ -73,7 +74,7 @@ export function frontClearanceChecks(fronts: readonly FrontFacts[]): Check[] {
       }
       if (gap < MIN_FRONT_GAP_MM - 1e-9) {
         out.push(check({
-          id: `fronts-rub:${a.id}:${b.id}`, severity: 'warning', title: `Fronts rub: ${where}`, partIds, numbers: { gapMm: gap, minGapMm: MIN_FRONT_GAP_MM },
+          id: `fronts-rub:${a.id}:${b.id}`, severity: 'warning', title: `Fronts rub: ${where()}`, partIds: partIds(), numbers: { gapMm: gap, minGapMm: MIN_FRONT_GAP_MM },
           message: `Only ${both(gap)} between the ${a.label} and the ${b.label}: they rub as they open, and seasonal swelling closes the gap.`,
           fix: `Leave at least ${both(MIN_FRONT_GAP_MM)} between fronts.`,
         }));
