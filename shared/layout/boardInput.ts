@@ -4,7 +4,7 @@
 import { InputError } from '../errors.ts';
 import { MM_PER_INCH } from '../units/length.ts';
 import type { BoardLayoutOptions, BoardPartInput, BoardStock, GrainRun, MillingAllowance } from './boardTypes.ts';
-import { DEFAULT_KERF_MM, MAX_QUANTITY, checkAllowance, checkCount, checkSize } from './sheetInput.ts';
+import { DEFAULT_KERF_MM, MAX_KERF_MM, MAX_QUANTITY, checkAllowance, checkCount, checkSize } from './sheetInput.ts';
 
 /**
  * Board sizes bought by default: 6 and 8 ft long, 4, 6 and 8 in wide, as a hardwood dealer's
@@ -72,7 +72,7 @@ export function boardSettings(options: BoardLayoutOptions): BoardSettings {
   return {
     stock,
     quarters: checkCount(options.quarters ?? 4, 'quarters', 1, 64),
-    kerfMm: checkAllowance(options.kerfMm ?? DEFAULT_KERF_MM, 'kerfMm', 20),
+    kerfMm: checkAllowance(options.kerfMm ?? DEFAULT_KERF_MM, 'kerfMm', MAX_KERF_MM),
     allowance: {
       lengthMm: checkAllowance(options.allowance?.lengthMm ?? DEFAULT_ALLOWANCE.lengthMm, 'allowance.lengthMm', 300),
       widthMm: checkAllowance(options.allowance?.widthMm ?? DEFAULT_ALLOWANCE.widthMm, 'allowance.widthMm', 100),

@@ -24,6 +24,10 @@ export const DEFAULT_SHEET_ATTEMPTS = 200;
 
 /** The longest side accepted for a part or stock, mm (about 20 m): beyond it input is a mistake. */
 export const MAX_SIZE_MM = 20_000;
+/** The widest kerf accepted, mm: no blade cuts wider. */
+export const MAX_KERF_MM = 20;
+/** The widest edge trim accepted, mm. */
+export const MAX_TRIM_MM = 100;
 /** The most instances of one part accepted. */
 export const MAX_QUANTITY = 10_000;
 
@@ -78,8 +82,8 @@ export function checkSheetParts(parts: readonly SheetPartInput[]): void {
 export function sheetSettings(options: SheetLayoutOptions): SheetSettings {
   const stock = options.stock ?? [STANDARD_SHEET];
   if (stock.length === 0) throw new InputError('stock', 'needs at least one sheet size', 'one or more sheets');
-  const kerfMm = checkAllowance(options.kerfMm ?? DEFAULT_KERF_MM, 'kerfMm', 20);
-  const trimMm = checkAllowance(options.trimMm ?? DEFAULT_TRIM_MM, 'trimMm', 100);
+  const kerfMm = checkAllowance(options.kerfMm ?? DEFAULT_KERF_MM, 'kerfMm', MAX_KERF_MM);
+  const trimMm = checkAllowance(options.trimMm ?? DEFAULT_TRIM_MM, 'trimMm', MAX_TRIM_MM);
   stock.forEach((s, i) => {
     checkSize(s.lengthMm, `stock[${i}].lengthMm`);
     checkSize(s.widthMm, `stock[${i}].widthMm`);

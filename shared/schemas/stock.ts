@@ -7,16 +7,15 @@ import { z } from 'zod';
 import type { StockSettings } from '../materials/stockSettings.ts';
 import { SHEET_GOOD_IDS } from '../wood/sheetGoods.ts';
 import { SPECIES_IDS } from '../wood/species.ts';
+import { MAX_KERF_MM, MAX_SIZE_MM, MAX_TRIM_MM } from '../layout/sheetInput.ts';
 import { timestampSchema } from './common.ts';
 
-/** Longest stock length accepted, mm: 20 m, longer than any stock a shop handles, shorter than a typing slip. */
-export const MAX_STOCK_LENGTH_MM = 20_000;
+/** Longest stock length accepted, mm: the layout's own limit (20 m). */
+export const MAX_STOCK_LENGTH_MM = MAX_SIZE_MM;
 /** Widest board accepted, mm (2 m). */
 export const MAX_BOARD_WIDTH_MM = 2_000;
-/** Widest kerf accepted, mm: the board layout's own limit. */
-export const MAX_KERF_MM = 20;
-/** Widest edge trim accepted, mm: the sheet layout's own limit. */
-export const MAX_TRIM_MM = 100;
+/** Widest kerf and edge trim accepted, mm: the layout's own limits, so the form and the layout agree. */
+export { MAX_KERF_MM, MAX_TRIM_MM };
 /** Longest label on a board, characters. */
 export const MAX_LABEL_CHARS = 60;
 /** Most offcuts, boards on hand, defects per board and sizes for sale a workshop may list. */
