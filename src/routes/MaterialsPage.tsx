@@ -29,10 +29,13 @@ import { StockOptionsForm } from '../components/StockOptionsForm.tsx';
 import { StockSaveBar } from '../components/StockSaveBar.tsx';
 import { TakeoffNumbers } from '../components/TakeoffNumbers.tsx';
 import { buildOutcome } from '../editor/pieceBuild.ts';
+import { lengthsInUserUnits } from '../editor/roomText.ts';
 import { exportFileStem } from '../export/download.ts';
 import { extrasOf, suggestedQuantities, unitItems } from '../materials/extras.ts';
+import { stockFieldName } from '../materials/stockFieldName.ts';
 import { useTakeoffRun } from '../materials/useTakeoffRun.ts';
 import { useEditorStore } from '../state/useEditorStore.ts';
+import { useLength } from '../state/useLength.ts';
 import { linkTo } from './paths.ts';
 
 const EMPTY_PRICES: PriceList = { currency: 'USD', items: [] };
@@ -115,6 +118,7 @@ function MaterialsBody({ result, workshopId, priceList, priceData, pricesError, 
   const [draft, setDraft] = useState<{ stock: StockSettings; version: string | null } | null>(null);
   const [effort, setEffort] = useState<LayoutEffort>('standard');
   const saveStock = useSaveStock(workshopId);
+  const length = useLength();
   const settings = draft?.stock ?? stockData?.stock ?? DEFAULT_STOCK_SETTINGS;
   const problems = useMemo(() => stockProblems(settings), [settings]);
   const stockReady = stockData !== null || stockError != null;
@@ -162,7 +166,7 @@ function MaterialsBody({ result, workshopId, priceList, priceData, pricesError, 
           {saveBar}
           {topProblems.length > 0 && (
             <ul role="alert" className="list-disc pl-4 text-xs text-pencil">
-              {topProblems.map((p) => <li key={p.field}>{p.field}: {p.message}</li>)}
+              {topProblems.map((p) => <li key={p.field}>{stockFieldName(p.path)} {lengthsInUserUnits(p.message, length)}.</li>)}
             </ul>
           )}
           <StockOptionsForm settings={settings} onChange={edit} sheetIds={sheetIds} readOnly={!canEditStock} />
