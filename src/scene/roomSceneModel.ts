@@ -5,6 +5,7 @@
  * and which parts and room solids the checks found meeting. Pure data; all lengths mm, Z up.
  */
 import { Matrix4, Vector3 } from 'three';
+import { boxUnion } from '../../shared/engine/geometry/box.ts';
 import type { Box3 } from '../../shared/engine/types.ts';
 import type { RoomScene } from '../../shared/room/roomScene.ts';
 import type { SceneMesh, SceneModel } from './sceneModel.ts';
@@ -96,11 +97,10 @@ export const ROOM_FOCUS_MARGIN_MM = 450;
 export function roomFocusBox(placed: RoomPieceModel, room: RoomScene, marginMm = ROOM_FOCUS_MARGIN_MM): Box3 {
   const boxes = [...placed.meshes.map((m) => m.worldBox), ...room.collisions.flatMap((c) => (c.overlapMm ? [c.overlapMm] : []))];
   if (boxes.length === 0) return room.roomBox;
-  const min = [0, 1, 2].map((k) => Math.min(...boxes.map((b) => b.min[k]!)) - marginMm);
-  const max = [0, 1, 2].map((k) => Math.max(...boxes.map((b) => b.max[k]!)) + marginMm);
+  const { min, max } = boxUnion(boxes);
   const inRoom = (k: number, v: number) => Math.min(room.roomBox.max[k]!, Math.max(room.roomBox.min[k]!, v));
   return {
-    min: [inRoom(0, min[0]!), inRoom(1, min[1]!), room.roomBox.min[2]],
-    max: [inRoom(0, max[0]!), inRoom(1, max[1]!), inRoom(2, max[2]!)],
+    min: [inRoom(0, min[0] - marginMm), inRoom(1, min[1] - marginMm), room.roomBox.min[2]],
+    max: [inRoom(0, max[0] + marginMm), inRoom(1, max[1] + marginMm), inRoom(2, max[2] + marginMm)],
   };
 }
