@@ -32,17 +32,17 @@ let last: { spec: PieceSpec; result: PieceResult } | null = null;
  */
 export function buildPiece(spec: PieceSpec): PieceResult {
   if (last?.spec === spec) return last.result;
-  const { spec: checked, chestLayout } = checkSpecForBuild(spec);
+  const { spec: checked, chestLayout, dresserLayout, cabinetLayout } = checkSpecForBuild(spec);
   let built;
   switch (checked.kind) {
     case 'chest':
       built = buildChest(checked, chestLayout);
       break;
     case 'dresser':
-      built = buildDresser(checked);
+      built = buildDresser(checked, dresserLayout);
       break;
     case 'cabinet':
-      built = buildCabinet(checked);
+      built = buildCabinet(checked, cabinetLayout);
       break;
     default:
       throw new InputError('kind', `the ${String(checked.kind)} is not built by this version of the engine yet; available: chest, dresser, cabinet`, 'chest, dresser, cabinet');

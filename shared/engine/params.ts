@@ -14,8 +14,9 @@ import { validateChestCombinations } from './pieces/chestValidate.ts';
 import type { ChestLayout } from './pieces/chestLayout.ts';
 import { CABINET_PARAMS } from './pieces/cabinetParams.ts';
 import { validateCabinetCombinations } from './pieces/cabinet.ts';
+import type { CaseLayout } from './pieces/caseLayout.ts';
 import { DRESSER_PARAMS } from './pieces/dresserParams.ts';
-import { validateDresserCombinations } from './pieces/dresser.ts';
+import { validateDresserCombinations, type DresserLayout } from './pieces/dresser.ts';
 import type { ParamValue, PieceKind, PieceSpec } from './types.ts';
 import { parseRoomSection } from '../room/parseRoom.ts';
 
@@ -24,19 +25,22 @@ export type { ParamDef, ParamKind } from './paramDef.ts';
 /** Every piece kind the engine knows the name of, built or not. */
 export const PIECE_KINDS: readonly PieceKind[] = ['chest', 'dresser', 'cabinet'];
 
+/** What a kind's combination checks worked out on the way, named for the kind. */
+type Worked = Omit<CheckedSpec, 'spec'>;
+
 interface KindParams {
   defs: readonly ParamDef[];
   /**
-   * Throws an InputError for a combination of values that cannot be built; may return what it
-   * worked out on the way (the chest's layout) so the builder need not work it out again.
+   * Throws an InputError for a combination of values that cannot be built; returns the layout
+   * it worked out on the way so the builder need not work it out again.
    */
-  combinations: (params: Readonly<Record<string, ParamValue>>, climate: Climate) => unknown;
+  combinations: (params: Readonly<Record<string, ParamValue>>, climate: Climate) => Worked;
 }
 
 const KINDS: Partial<Record<PieceKind, KindParams>> = {
-  chest: { defs: CHEST_PARAMS, combinations: validateChestCombinations },
-  dresser: { defs: DRESSER_PARAMS, combinations: validateDresserCombinations },
-  cabinet: { defs: CABINET_PARAMS, combinations: validateCabinetCombinations },
+  chest: { defs: CHEST_PARAMS, combinations: (params, climate) => ({ chestLayout: validateChestCombinations(params, climate) }) },
+  dresser: { defs: DRESSER_PARAMS, combinations: (params, climate) => ({ dresserLayout: validateDresserCombinations(params, climate) }) },
+  cabinet: { defs: CABINET_PARAMS, combinations: (params, climate) => ({ cabinetLayout: validateCabinetCombinations(params, climate) }) },
 };
 
 function kindParams(kind: unknown): KindParams {
@@ -135,11 +139,15 @@ export function validateSpec(spec: unknown): PieceSpec {
   return checkSpecForBuild(spec).spec;
 }
 
-/** A spec checked by `validateSpec`, with the chest's layout its checks worked out (mm). */
+/** A spec checked by `validateSpec`, with the layout its checks worked out for its kind (mm). */
 export interface CheckedSpec {
   spec: PieceSpec;
   /** Set for a chest: the layout the combination checks read, which the builder reuses. */
   chestLayout?: ChestLayout;
+  /** Set for a dresser: the layout the combination checks read, which the builder reuses. */
+  dresserLayout?: DresserLayout;
+  /** Set for a cabinet: the carcass layout the combination checks read, which the builder reuses. */
+  cabinetLayout?: CaseLayout;
 }
 
 /** `validateSpec`, keeping what the checks worked out for `buildPiece`. */
@@ -177,7 +185,7 @@ export function checkSpecForBuild(spec: unknown): CheckedSpec {
     parseRoomSection(s.room, 'room');
     out.room = s.room;
   }
-  return out.kind === 'chest' ? { spec: out, chestLayout: worked as ChestLayout } : { spec: out };
+  return { spec: out, ...worked };
 }
 
 function readClimate(value: unknown): { buildMcPercent: number; lowMcPercent: number; highMcPercent: number } {

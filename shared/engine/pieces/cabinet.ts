@@ -10,7 +10,7 @@ import type { Check, ParamValue, PieceSpec } from '../types.ts';
 import { both, check } from '../checks/check.ts';
 import { tipOverCheck } from '../checks/tipOver.ts';
 import { buildCase, doorPanelFloat, type CaseBuild, type CaseExtras } from './caseBuild.ts';
-import { caseLayout, type CasePlan } from './caseLayout.ts';
+import { caseLayout, type CaseLayout, type CasePlan } from './caseLayout.ts';
 import type { CabinetParams } from './cabinetParams.ts';
 
 /** A 36 in work surface: the usual kitchen counter height. Common practice, no published source. */
@@ -53,8 +53,11 @@ function fail(field: string, message: string, limit: string): never {
   throw new InputError(field, `${message}; must be ${limit}`, limit);
 }
 
-/** Throws an InputError for the first combination of cabinet parameters that cannot be built. */
-export function validateCabinetCombinations(params: Readonly<Record<string, ParamValue>>, climate: Climate = DEFAULT_CLIMATE): void {
+/**
+ * Throws an InputError for the first combination of cabinet parameters that cannot be built;
+ * returns the carcass layout (mm) the checks read, so `buildCabinet` need not work it out again.
+ */
+export function validateCabinetCombinations(params: Readonly<Record<string, ParamValue>>, climate: Climate = DEFAULT_CLIMATE): CaseLayout {
   const p = params as unknown as CabinetParams;
   const lay = caseLayout(cabinetPlan(params, climate));
   const front = lay.grid.cells[0]!.fronts[0]!;
@@ -92,6 +95,7 @@ export function validateCabinetCombinations(params: Readonly<Record<string, Para
     }
     if (p.shelfEndClearance * 2 >= inside.x[1] - inside.x[0] - 25) fail('shelfEndClearance', 'too much', 'smaller');
   }
+  return lay;
 }
 
 function workSurfaceCheck(p: CabinetParams, partIds: readonly string[]): Check[] {
@@ -104,8 +108,11 @@ function workSurfaceCheck(p: CabinetParams, partIds: readonly string[]): Check[]
   })];
 }
 
-/** Builds a cabinet from a spec already checked by `validateSpec`. */
-export function buildCabinet(spec: PieceSpec): CaseBuild {
+/**
+ * Builds a cabinet from a spec already checked by `validateSpec`; `layout` is the carcass layout
+ * those checks worked out for this spec, worked out here when not given.
+ */
+export function buildCabinet(spec: PieceSpec, layout?: CaseLayout): CaseBuild {
   const plan = cabinetPlan(spec.params as Record<string, ParamValue>, spec.climate ?? DEFAULT_CLIMATE);
   const p = plan.p as CabinetParams;
   return buildCase(plan, {
@@ -121,5 +128,5 @@ export function buildCabinet(spec: PieceSpec): CaseBuild {
         : [tipOverCheck(sides, 'cabinet', p.height, p.depth)];
       return [...hung, ...workSurfaceCheck(p, sides)];
     },
-  });
+  }, layout);
 }

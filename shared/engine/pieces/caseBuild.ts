@@ -90,9 +90,12 @@ type CaseBuildParams = CasePlan['p'];
 /** What a builder returns before derived outputs: the chest's shape. */
 export type CaseBuild = ChestBuild;
 
-/** Builds the piece described by `plan`. */
-export function buildCase(plan: CasePlan, extras: CaseExtras): CaseBuild {
-  const lay = caseLayout(plan);
+/**
+ * Builds the piece described by `plan`; `layout` is `caseLayout(plan)` when the spec check
+ * already worked it out, worked out here when not given.
+ */
+export function buildCase(plan: CasePlan, extras: CaseExtras, layout?: CaseLayout): CaseBuild {
+  const lay = layout ?? caseLayout(plan);
   const p = plan.p;
   const species = getSpecies(p.species);
   const solid: Material = { kind: 'solid', speciesId: species.id, speciesName: species.name };

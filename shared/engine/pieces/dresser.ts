@@ -8,8 +8,8 @@ import { graduatedHeights } from '../constructions/graduatedHeights.ts';
 import type { ParamValue, PieceSpec } from '../types.ts';
 import { tipOverCheck } from '../checks/tipOver.ts';
 import { buildCase, type CaseBuild } from './caseBuild.ts';
-import { caseLayout, type CasePlan } from './caseLayout.ts';
-import { buildFramedDresser, framedLayout, type FramedParams } from './dresserFramed.ts';
+import { caseLayout, type CaseLayout, type CasePlan } from './caseLayout.ts';
+import { buildFramedDresser, framedLayout, type FramedLayout, type FramedParams } from './dresserFramed.ts';
 import { MAX_DRAWER_ROWS, type DresserParams } from './dresserParams.ts';
 
 /** The carcass-piece plan a dresser's parameters describe. */
@@ -39,11 +39,17 @@ export function dresserPlan(params: Readonly<Record<string, ParamValue>>, climat
   };
 }
 
-/** Throws an InputError for the first combination of dresser parameters that cannot be built. */
-export function validateDresserCombinations(params: Readonly<Record<string, ParamValue>>, climate: Climate = DEFAULT_CLIMATE): void {
+/** A dresser's worked layout (mm): the frame-and-panel one or the sheet-goods carcass one. */
+export type DresserLayout = { framed: true; layout: FramedLayout } | { framed: false; layout: CaseLayout };
+
+/**
+ * Throws an InputError for the first combination of dresser parameters that cannot be built;
+ * returns the layout the check worked out, so `buildDresser` need not work it out again.
+ */
+export function validateDresserCombinations(params: Readonly<Record<string, ParamValue>>, climate: Climate = DEFAULT_CLIMATE): DresserLayout {
   const plan = dresserPlan(params, climate);
-  if (isFramed(plan)) framedLayout(...framedArgs(plan));
-  else caseLayout(plan);
+  if (isFramed(plan)) return { framed: true, layout: framedLayout(...framedArgs(plan)) };
+  return { framed: false, layout: caseLayout(plan) };
 }
 
 const isFramed = (plan: CasePlan): boolean => (plan.p as DresserParams).caseConstruction === 'frame-and-panel';
@@ -53,9 +59,12 @@ function framedArgs(plan: CasePlan): Parameters<typeof framedLayout> {
   return [plan.p as DresserParams & FramedParams, plan.top!, d!, plan.rows, plan.columns, plan.rowHeights, plan.rowField, plan.climate];
 }
 
-/** Builds a dresser from a spec already checked by `validateSpec`. */
-export function buildDresser(spec: PieceSpec): CaseBuild {
+/**
+ * Builds a dresser from a spec already checked by `validateSpec`; `layout` is the one those
+ * checks worked out for this spec, worked out here when not given.
+ */
+export function buildDresser(spec: PieceSpec, layout?: DresserLayout): CaseBuild {
   const plan = dresserPlan(spec.params as Record<string, ParamValue>, spec.climate ?? DEFAULT_CLIMATE);
-  if (isFramed(plan)) return buildFramedDresser(...framedArgs(plan));
-  return buildCase(plan, { pieceChecks: (ids) => [tipOverCheck(ids.filter((id) => id.includes('side') || id === 'top'), 'dresser', plan.p.height, plan.p.depth)] });
+  if (isFramed(plan)) return buildFramedDresser(...framedArgs(plan), layout?.framed ? layout.layout : undefined);
+  return buildCase(plan, { pieceChecks: (ids) => [tipOverCheck(ids.filter((id) => id.includes('side') || id === 'top'), 'dresser', plan.p.height, plan.p.depth)] }, layout && !layout.framed ? layout.layout : undefined);
 }

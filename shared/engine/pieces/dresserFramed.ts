@@ -218,8 +218,8 @@ function spacerLayout(p: P, L: number, T: number, inner: FramedLayout['inner'], 
 }
 
 /** Builds the framed dresser. */
-export function buildFramedDresser(p: P, top: TopPlan, d: DrawerPlan, rows: number, columns: number, rowHeights: (a: number) => number[], rowField: string, climate: Climate): CaseBuild {
-  const lay = framedLayout(p, top, d, rows, columns, rowHeights, rowField, climate);
+export function buildFramedDresser(p: P, top: TopPlan, d: DrawerPlan, rows: number, columns: number, rowHeights: (a: number) => number[], rowField: string, climate: Climate, layout?: FramedLayout): CaseBuild {
+  const lay = layout ?? framedLayout(p, top, d, rows, columns, rowHeights, rowField, climate);
   const { L, T } = lay;
   const species = getSpecies(p.species);
   const solid: Material = { kind: 'solid', speciesId: species.id, speciesName: species.name };
