@@ -6,19 +6,13 @@
  *
  * This is the one adapter between the engine and room fit. The one fact the result gives without
  * a parameter behind it is said so in `assumptions`: the lid's opening angle, the engine's usual
- * stop at {@link DEFAULT_LID_OPEN_ANGLE_DEG} (chests have no lid-stay parameter yet).
+ * stop at {@link LID_OPEN_ANGLE_DEG} (chests have no lid-stay parameter yet).
  */
 import { boxAt, boxUnion, boxVolume } from '../engine/geometry/box.ts';
 import { worldSize } from '../engine/geometry/placement.ts';
 import { LID_OPEN_ANGLE_DEG } from '../engine/pieces/openings.ts';
 import type { Box3, PartInstanceRef, PieceKind, PieceResult } from '../engine/types.ts';
 import { assert } from '../assert.ts';
-
-/**
- * The lid opening angle the engine gives when the design has no other, degrees from closed:
- * upright, where a lid-support hinge or stay commonly stops it (common practice, no published source).
- */
-export const DEFAULT_LID_OPEN_ANGLE_DEG = LID_OPEN_ANGLE_DEG;
 
 /** One placed part instance, its world box in the piece's frame (mm). */
 export interface EnvelopePart {
@@ -107,8 +101,8 @@ export function envelopeFromResult(result: PieceResult): PieceEnvelope {
   for (const o of result.openings) {
     if (o.kind !== 'lid') continue;
     lid = { parts: partsOf(o.parts), hingeYMm: o.hingeAxis.origin[1], hingeZMm: o.hingeAxis.origin[2], openAngleDeg: o.openAngleDeg };
-    if (o.openAngleDeg === DEFAULT_LID_OPEN_ANGLE_DEG) {
-      assumptions.push(`lid opening angle not given; ${DEFAULT_LID_OPEN_ANGLE_DEG}° assumed (common practice, no published source)`);
+    if (o.openAngleDeg === LID_OPEN_ANGLE_DEG) {
+      assumptions.push(`lid opening angle not given; ${LID_OPEN_ANGLE_DEG}° assumed (common practice, no published source)`);
     }
   }
 

@@ -30,7 +30,7 @@ export const MAX_OFFCUT_COUNT = 100;
 const FIT_TOLERANCE_MM = 1e-6;
 
 /** What a required field left out reports, naming no type: the form has simply not sent it. */
-export const MISSING_MESSAGE = 'is missing';
+const MISSING_MESSAGE = 'is missing';
 
 /** A type error that says `is missing` when the field was left out, and `message` when it holds the wrong kind of value. */
 const orMissing = (message: string) => ({ error: (issue: { input?: unknown }) => (issue.input === undefined ? MISSING_MESSAGE : message) });
@@ -143,7 +143,6 @@ export const stockBody = z.strictObject({
   version: stockVersionSchema,
   stock: stockSettingsSchema,
 });
-export type StockBody = z.infer<typeof stockBody>;
 
 /** A workshop's stock as members read it; `updatedAt` and `version` are null when none has been saved (the defaults). */
 export const stockResponse = z.object({

@@ -92,7 +92,7 @@ function wallFloat(p: P, climate: Climate, spanMm: number, count: number, openin
  * fronts), and the mullions likewise as much as the legs: neighbours meet without overlapping
  * and the reveals stay even.
  */
-export function framedOverlayLaps(p: Pick<P, 'overlay' | 'frontGap'>, frame: FrameWidths): { railMm: number; mullionMm: number } {
+function framedOverlayLaps(p: Pick<P, 'overlay' | 'frontGap'>, frame: FrameWidths): { railMm: number; mullionMm: number } {
   const shows = (outerMm: number) => Math.max(p.frontGap, outerMm - p.overlay);
   return {
     railMm: Math.min(p.overlay, (frame.midRailMm - shows(Math.min(frame.topRailMm, frame.bottomRailMm))) / 2),

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { buildPiece, defaultSpec } from '../../../shared/engine/index.ts';
-import { DEFAULT_LID_OPEN_ANGLE_DEG, envelopeFromResult } from '../../../shared/room/pieceEnvelope.ts';
+import { LID_OPEN_ANGLE_DEG } from '../../../shared/engine/pieces/openings.ts';
+import { envelopeFromResult } from '../../../shared/room/pieceEnvelope.ts';
 import { boxChestResult } from './support/boxChest.ts';
 
 const TOLERANCE_MM = 1e-6;
@@ -11,7 +12,7 @@ describe('envelopeFromResult', () => {
     const env = envelopeFromResult(boxChestResult({ width: 1016, depth: 483, height: 584 }));
     expect(env.lid?.hingeYMm).toBeCloseTo(483, 9);
     expect(env.lid?.hingeZMm).toBeCloseTo(565, 9);
-    expect(env.lid?.openAngleDeg).toBe(DEFAULT_LID_OPEN_ANGLE_DEG);
+    expect(env.lid?.openAngleDeg).toBe(LID_OPEN_ANGLE_DEG);
     expect(env.lid?.parts.map((p) => p.partId).sort()).toEqual(['batten', 'batten', 'lid']);
     expect(env.subassemblies.map((s) => s.id)).toEqual(['case', 'lid']);
     expect(env.assumptions.join(' ')).toContain('common practice, no published source');
