@@ -13,6 +13,7 @@ import type { PieceSpec } from '../../shared/engine/types.ts';
 import { formatLength, parseLength } from '../../shared/units/index.ts';
 import { answerNicheFit } from '../../src/editor/nicheFit.ts';
 import { SCREENSHOT_DIR } from '../support/browser.ts';
+import { lookAtCanvas, settleCanvas, type CanvasLook } from '../support/canvasLook.ts';
 import { openDemoBrowser, type DemoBrowser } from '../support/demoBrowser.ts';
 
 interface DemoAccounts {
@@ -45,37 +46,8 @@ afterAll(async () => {
 });
 
 /** What the canvas shows: the share of pixels off the paper, and of pencil red. */
-async function look(): Promise<{ inked: number; red: number }> {
-  return page.locator(CANVAS).evaluate((el) => {
-    const source = el as HTMLCanvasElement;
-    const copy = document.createElement('canvas');
-    copy.width = source.width;
-    copy.height = source.height;
-    const ctx = copy.getContext('2d')!;
-    ctx.drawImage(source, 0, 0);
-    const { data, width, height } = ctx.getImageData(0, 0, copy.width, copy.height);
-    const [r0, g0, b0] = [data[0]!, data[1]!, data[2]!];
-    let [inked, red, n] = [0, 0, 0];
-    for (let y = 0; y < height; y += 2) {
-      for (let x = 0; x < width; x += 2) {
-        const i = (y * width + x) * 4;
-        const [r, g, b] = [data[i]!, data[i + 1]!, data[i + 2]!];
-        n++;
-        if (Math.abs(r - r0) + Math.abs(g - g0) + Math.abs(b - b0) > 30) inked++;
-        if (r > g + 60 && r > b + 80) red++;
-      }
-    }
-    return { inked: inked / n, red: red / n };
-  });
-}
-
-/** Lets the view draw what the page just asked of it (it renders on demand, in software here). */
-async function settle() {
-  const frames = () => page.evaluate(() => new Promise<void>((done) => requestAnimationFrame(() => requestAnimationFrame(() => setTimeout(done, 300)))));
-  await frames();
-  await page.locator('canvas[data-camera-settled="true"][data-solids-ready="true"]').waitFor({ timeout: 60_000 });
-  await frames();
-}
+const look = (): Promise<CanvasLook> => lookAtCanvas(page, CANVAS);
+const settle = (): Promise<void> => settleCanvas(page);
 
 async function shot(name: string) {
   await page.evaluate(() => document.fonts.ready);
